@@ -1,0 +1,8 @@
+namespace WindScript.Diagnostics;
+
+public enum Severity
+{
+    Info,
+    Warning,
+    Error,
+}

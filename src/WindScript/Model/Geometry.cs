@@ -1,0 +1,40 @@
+namespace WindScript.Model;
+
+/// <summary>
+/// Core dimensions in SI (metres). Each is optional: analyses that need one report that it is
+/// missing rather than assume it.
+/// </summary>
+public sealed record Geometry
+{
+    /// <summary>Stator bore (inner) diameter.</summary>
+    public double? BoreDiameter { get; init; }
+
+    /// <summary>Axial length of the core.</summary>
+    public double? StackLength { get; init; }
+
+    /// <summary>Mechanical air gap (radial).</summary>
+    public double? Gap { get; init; }
+
+    /// <summary>Width of the slot opening at the bore, for Carter's coefficient.</summary>
+    public double? SlotOpening { get; init; }
+
+    /// <summary>Rotor outer radius, if given; otherwise bore radius minus gap.</summary>
+    public double? RotorRadius { get; init; }
+
+    /// <summary>Skew of the stator slots, in slot pitches (0 = unskewed).</summary>
+    public double SkewSlots { get; init; }
+
+    /// <summary>Peak of the fundamental air-gap flux density (tesla), for back-EMF.</summary>
+    public double? GapFluxDensity { get; init; }
+
+    public double? BoreRadius => BoreDiameter / 2;
+
+    /// <summary>The rotor radius actually used: given, or bore radius minus gap.</summary>
+    public double? RotorOuterRadius => RotorRadius ?? (BoreDiameter is { } d && Gap is { } g ? d / 2 - g : null);
+
+    /// <summary>The radial gap actually used: given, or bore radius minus rotor radius.</summary>
+    public double? EffectiveMechanicalGap => Gap ?? (BoreDiameter is { } d && RotorRadius is { } r ? d / 2 - r : null);
+
+    /// <summary>Slot pitch at the bore, in metres.</summary>
+    public double? SlotPitch(int slots) => BoreDiameter is { } d ? Math.PI * d / slots : null;
+}

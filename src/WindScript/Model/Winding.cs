@@ -1,0 +1,35 @@
+using System.Collections.Immutable;
+using WindScript.Text;
+
+namespace WindScript.Model;
+
+/// <summary>The stator winding: its coils, layers and parallel paths, plus what the source declared.</summary>
+public sealed record Winding
+{
+    public required string Name { get; init; }
+
+    /// <summary>Coil sides a slot may hold (1 or 2).</summary>
+    public required int Layers { get; init; }
+
+    /// <summary>Parallel paths per phase.</summary>
+    public int Paths { get; init; } = 1;
+
+    public required ImmutableArray<Coil> Coils { get; init; }
+
+    /// <summary>Coil pitch in slots if the source stated one.</summary>
+    public int? DeclaredPitch { get; init; }
+
+    /// <summary>Series turns per phase if the source stated them (checked against the coils).</summary>
+    public int? DeclaredSeriesTurns { get; init; }
+
+    /// <summary>Conductors per slot if the source stated them (checked against the coils).</summary>
+    public int? DeclaredConductorsPerSlot { get; init; }
+
+    public TextSpan Span { get; init; }
+
+    /// <summary>Spans of the declarations of paths, series turns and conductors (for diagnostics and fixes).</summary>
+    public TextSpan PathsSpan { get; init; }
+    public TextSpan SeriesTurnsSpan { get; init; }
+    public TextSpan ConductorsPerSlotSpan { get; init; }
+    public TextSpan LayersSpan { get; init; }
+}
