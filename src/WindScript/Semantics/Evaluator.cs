@@ -57,13 +57,16 @@ public static class Evaluator
         {
             machine = new MachineBinder(diagnostics, evaluator, model).Bind(machineBlock, top);
             model.Define(machine.Name, SymbolKind.Machine, machineBlock.Name?.Span ?? machineBlock.Keyword.Span);
-            void Require(bool present, string what)
+            // A property whose line did not parse was reported already; do not call it missing.
+            var brokenLines = machineBlock.Body.OfType<ErrorStatementSyntax>()
+                .Select(e => tree.Source.Slice(e.Span).Split(' ', ':')[0]).ToHashSet();
+            void Require(bool present, string keyword, string what)
             {
-                if (!present) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
+                if (!present && !brokenLines.Contains(keyword)) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
             }
-            Require(machine.Slots is not null || machine.SlotsSpan != default, "its slot count ('slots')");
-            Require(machine.Poles is not null || machine.PolesSpan != default, "its pole count ('poles')");
-            Require(!machine.Phases.IsDefaultOrEmpty || machine.PhasesSpan != default, "its phases ('phases U V W')");
+            Require(machine.Slots is not null || machine.SlotsSpan != default, "slots", "its slot count ('slots')");
+            Require(machine.Poles is not null || machine.PolesSpan != default, "poles", "its pole count ('poles')");
+            Require(!machine.Phases.IsDefaultOrEmpty || machine.PhasesSpan != default, "phases", "its phases ('phases U V W')");
         }
         evaluator.Slots = machine.Slots ?? 0;
 
