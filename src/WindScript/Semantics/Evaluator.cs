@@ -59,7 +59,7 @@ public static class Evaluator
             model.Define(machine.Name, SymbolKind.Machine, machineBlock.Name?.Span ?? machineBlock.Keyword.Span);
             // A property whose line did not parse was reported already; do not call it missing.
             var brokenLines = machineBlock.Body.OfType<ErrorStatementSyntax>()
-                .Select(e => tree.Source.Slice(e.Span).Split(' ', ':')[0]).ToHashSet();
+                .Select(e => tree.Source.Slice(e.Span).Split([' ', ':', '\t', '\r', '\n'])[0]).ToHashSet();
             void Require(bool present, string keyword, string what)
             {
                 if (!present && !brokenLines.Contains(keyword)) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
