@@ -1,0 +1,28 @@
+using System.Globalization;
+
+namespace WindScript.LanguageServer.Features;
+
+/// <summary>Numbers as hover text shows them: invariant culture, a sensible number of digits.</summary>
+public static class Numbers
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public static string Show(double value, int decimals = 4)
+    {
+        if (double.IsNaN(value) || double.IsInfinity(value)) return value.ToString(Inv);
+        double rounded = Math.Round(value, decimals);
+        return (rounded == 0 ? 0 : rounded).ToString("0." + new string('#', decimals), Inv);
+    }
+
+    public static string Degrees(double radians) => Show(radians * 180 / Math.PI, 2) + "°";
+
+    /// <summary>A ratio as a reduced fraction ("7/9"), or a whole number.</summary>
+    public static string Fraction(long numerator, long denominator)
+    {
+        long g = Model.WindingDesign.Gcd(numerator, denominator);
+        if (g == 0) return "0";
+        long n = numerator / g, d = denominator / g;
+        if (d < 0) (n, d) = (-n, -d);
+        return d == 1 ? n.ToString(Inv) : $"{n}/{d}";
+    }
+}
