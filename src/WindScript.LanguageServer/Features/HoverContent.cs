@@ -15,7 +15,9 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
     public static HoverContent? At(Compilation c, int offset)
     {
         var path = SyntaxNavigation.PathAt(c.Syntax.Root, offset);
-        if (c.Semantics.SymbolAt(offset) is { } symbol) return ForSymbol(c, symbol, offset);
+        // A phase written in a coil or pattern is best explained by the coils it makes there.
+        if (c.Semantics.SymbolAt(offset) is { } symbol && !(symbol.Kind == SymbolKind.Phase && path.Any(n => n is CoilSyntax or PatternEntrySyntax)))
+            return ForSymbol(c, symbol, offset);
         for (int i = path.Count - 1; i >= 0; i--)
         {
             var answer = path[i] switch

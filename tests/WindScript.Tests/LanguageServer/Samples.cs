@@ -8,7 +8,7 @@ public static class Samples
     /// <summary>A clean file: 36 slots, 4 poles, a double-layer 7/9 short-pitch pattern winding, two drives.</summary>
     public const string FanMotor = """
         # Fictional test machine: a small fan motor, proposal A.
-        let n = 11            # turns per coil
+        let n = 11  # turns per coil
         let bore_d = 150 mm
 
         machine fan_motor {
