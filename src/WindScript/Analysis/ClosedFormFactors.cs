@@ -5,6 +5,8 @@ namespace WindScript.Analysis;
 /// Rotating Electrical Machines, ch. 2), written in the mechanical order ν for a Q-slot stator.
 /// In electrical terms (n = ν/p, slot angle α = 2πp/Q): k_d = sin(nqα/2)/(q sin(nα/2)),
 /// k_p = sin(n·(y/τ_p)·π/2), k_sk = sin(n·s·α/2)/(n·s·α/2). All return magnitudes.
+/// k_d and k_p describe one pole of a regular winding: they hold at odd electrical orders; the
+/// reversed belts of the next pole cancel every even order and every non-integer one.
 /// </summary>
 public static class ClosedFormFactors
 {
