@@ -19,6 +19,9 @@ namespace WindScript.Analysis;
 /// </remarks>
 public static class DifferentialLeakage
 {
+    /// <summary>|Σ S_k(p)| below this fraction of all conductors means the winding has no working wave.</summary>
+    public const double NoWorkingWave = 1e-9;
+
     /// <summary>
     /// σ_δ of a winding given as phase-major layer-summed conductors (phases × Q). No allocation
     /// for Q ≤ 1024. Returns NaN when the winding has no working wave of order p.
@@ -33,9 +36,11 @@ public static class DifferentialLeakage
         spaceRe.Clear();
         spaceIm.Clear();
         Complex plus = Complex.Zero, minus = Complex.Zero;
+        double conductorSum = 0;
         for (int k = 0; k < phases; k++)
         {
             var phase = conductors.Slice(k * q, q);
+            foreach (int c in phase) conductorSum += Math.Abs(c);
             var (sin, cos) = Math.SinCos(k * phaseShiftRadians);
             TurnsFunction.Levels(phase, 1, levels);
             for (int i = 0; i < q; i++)
@@ -51,9 +56,11 @@ public static class DifferentialLeakage
         double meanSquare = 0;
         for (int i = 0; i < q; i++) meanSquare += spaceRe[i] * spaceRe[i] + spaceIm[i] * spaceIm[i];
         meanSquare /= q;
-        // |F±_p| = |Σ_k S_k(p) e^(±jkφ)| / (2πp)
-        double working = Math.Max(plus.Magnitude, minus.Magnitude) / (2 * Math.PI * polePairs);
-        return working == 0 ? double.NaN : meanSquare / (working * working) - 1;
+        // |F±_p| = |Σ_k S_k(p) e^(±jkφ)| / (2πp); a working wave at rounding level counts as none.
+        double slotSum = Math.Max(plus.Magnitude, minus.Magnitude);
+        if (slotSum <= NoWorkingWave * conductorSum) return double.NaN;
+        double working = slotSum / (2 * Math.PI * polePairs);
+        return meanSquare / (working * working) - 1;
     }
 
     /// <summary>σ_δ of a design, for balanced currents at the design's phase shift. NaN without a working wave.</summary>

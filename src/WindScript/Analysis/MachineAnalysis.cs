@@ -89,6 +89,8 @@ public static class MachineAnalysis
         var unit = CurrentPhasors.Balanced(design.Phases.Length, design.PhaseShiftDegrees * Math.PI / 180);
         var (f, b) = TravellingWaves.At(winding, unit.Phasors.AsSpan(), design.PolePairs);
         double working = Math.Max(f.Magnitude, b.Magnitude);
+        double conductors = winding.SlotConductors.Sum(c => c.Sum(Math.Abs)) / winding.Paths;
+        if (working * 2 * Math.PI * design.PolePairs <= DifferentialLeakage.NoWorkingWave * conductors) working = 0;
         var waves = ImmutableArray.CreateBuilder<BalancedWave>();
         var sub = ImmutableArray.CreateBuilder<int>();
         var even = ImmutableArray.CreateBuilder<int>();
