@@ -351,16 +351,18 @@ internal sealed class WindingBinder(
     private void BuildSingleLayer(List<PatternCell> cells, int q, int y, int turns, string group, Func<int, int> wrap)
     {
         var claimed = new bool[q];
+        var reported = new bool[q]; // entries already named as wrong are not read as go sides too
         for (int s = 1; s <= q; s++)
         {
             var cell = cells[s - 1];
-            if (cell.Phase is not { } phase || cell.Sign < 0) continue;
+            if (cell.Phase is not { } phase || cell.Sign < 0 || reported[s - 1]) continue;
             int ret = wrap(s + y);
             var other = cells[ret - 1];
             if (other.Phase != phase || other.Sign != -1 || claimed[ret - 1])
             {
                 diagnostics.Add(DiagnosticCatalog.PatternMismatch, other.Entry.Span,
                     $"slot {ret} should hold -{Name(phase)} to close the coil from slot {s} (pitch {y})");
+                reported[ret - 1] = true;
                 continue;
             }
             claimed[ret - 1] = true;
