@@ -1,3 +1,5 @@
+using WindScript.Analysis;
+
 namespace WindScript.LanguageServer.Documents;
 
 /// <summary>
@@ -7,6 +9,7 @@ namespace WindScript.LanguageServer.Documents;
 public sealed class Document(string uri, int version, string text)
 {
     private Compilation? _compilation;
+    private (bool Done, AnalysisResult? Result) _analysis;
 
     public string Uri { get; } = uri;
 
@@ -19,10 +22,24 @@ public sealed class Document(string uri, int version, string text)
 
     public Compilation Compilation => _compilation ??= WindScript.Compilation.Compile(Text, Uri);
 
+    /// <summary>The physics of the current design (winding factors, spectra), or null without a complete design.</summary>
+    public AnalysisResult? Analysis
+    {
+        get
+        {
+            if (!_analysis.Done) _analysis = (true, Compilation.Design is { } design ? MachineAnalysis.Evaluate(design, HoverAnalysis) : null);
+            return _analysis.Result;
+        }
+    }
+
+    /// <summary>Hover shows the main harmonics, so orders up to the 25th electrical are plenty.</summary>
+    private static readonly AnalysisOptions HoverAnalysis = new() { MaxElectricalOrder = 25 };
+
     public void Update(int version, string text)
     {
         Version = version;
         Text = text;
         _compilation = null;
+        _analysis = default;
     }
 }

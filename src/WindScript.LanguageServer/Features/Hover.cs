@@ -12,7 +12,7 @@ public static class Hover
     {
         var c = document.Compilation;
         int offset = Positions.ToOffset(c.Source, parameters["position"]);
-        if (HoverContent.At(c, offset) is not { } content) return null;
+        if (HoverContent.At(c, () => document.Analysis, offset) is not { } content) return null;
         return new JsonObject
         {
             ["contents"] = new JsonObject

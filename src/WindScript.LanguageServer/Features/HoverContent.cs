@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using WindScript.Model;
 using WindScript.Semantics;
 using WindScript.Syntax;
@@ -12,12 +13,12 @@ namespace WindScript.LanguageServer.Features;
 /// </summary>
 public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<string> Lines)
 {
-    public static HoverContent? At(Compilation c, int offset)
+    public static HoverContent? At(Compilation c, Func<AnalysisResult?> analysis, int offset)
     {
         var path = SyntaxNavigation.PathAt(c.Syntax.Root, offset);
         // A phase written in a coil or pattern is best explained by the coils it makes there.
         if (c.Semantics.SymbolAt(offset) is { } symbol && !(symbol.Kind == SymbolKind.Phase && path.Any(n => n is CoilSyntax or PatternEntrySyntax)))
-            return ForSymbol(c, symbol, offset);
+            return ForSymbol(c, analysis, symbol, offset);
         for (int i = path.Count - 1; i >= 0; i--)
         {
             var answer = path[i] switch
@@ -27,7 +28,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
                 PropertySyntax property => ForProperty(c, property, offset),
                 ExpressionSyntax expression when path[i - 1] is not (ExpressionSyntax or PropertySyntax) => ForExpression(c, expression),
                 SineTermSyntax or DcTermSyntax or PhaseCurrentSyntax or BalancedSyntax => ForDriveStatement(c, path, i),
-                BlockSyntax block when block.Keyword.Span.Contains(offset) || block.Keyword.Span.End == offset => ForBlock(c, block),
+                BlockSyntax block when block.Keyword.Span.Contains(offset) || block.Keyword.Span.End == offset => ForBlock(c, analysis, block),
                 _ => null,
             };
             if (answer is not null) return answer;
@@ -37,7 +38,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
 
     // ---- names ---------------------------------------------------------------------------------
 
-    private static HoverContent? ForSymbol(Compilation c, Symbol symbol, int offset)
+    private static HoverContent? ForSymbol(Compilation c, Func<AnalysisResult?> analysis, Symbol symbol, int offset)
     {
         var span = symbol.Definition.Contains(offset) || symbol.Definition.End == offset
             ? symbol.Definition
@@ -58,13 +59,13 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
                 return loop is null ? null : ForLoopVariable(c, loop, span);
 
             case SymbolKind.Phase:
-                return ForPhase(c, symbol.Name, span);
+                return ForPhase(c, analysis, symbol.Name, span);
 
             case SymbolKind.Machine when design is not null:
-                return new HoverContent(span, $"machine {design.Name}", MachineFacts(design));
+                return new HoverContent(span, $"machine {design.Name}", MachineFacts(design, analysis()));
 
             case SymbolKind.Winding when design is not null:
-                return new HoverContent(span, $"winding {design.Winding.Name}", WindingFacts(design));
+                return new HoverContent(span, $"winding {design.Winding.Name}", WindingFacts(design, analysis()));
 
             case SymbolKind.Group when design is not null:
                 return new HoverContent(span, $"group {symbol.Name}", GroupFacts(design, symbol.Name));
@@ -96,7 +97,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         return new HoverContent(span, title, lines);
     }
 
-    private static HoverContent ForPhase(Compilation c, string name, TextSpan span)
+    private static HoverContent ForPhase(Compilation c, Func<AnalysisResult?> analysis, string name, TextSpan span)
     {
         if (c.Design is not { } d || d.Phases.FirstOrDefault(p => p.Name == name) is not { } phase)
             return new HoverContent(span, $"phase {name}", []);
@@ -107,6 +108,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
             $"{coils.Length} coil{(coils.Length == 1 ? "" : "s")}, {d.TotalTurns(phase.Index)} turns in all",
             $"series turns per phase: {Numbers.Show(d.SeriesTurns(phase.Index), 2)} ({d.Winding.Paths} parallel path{(d.Winding.Paths == 1 ? "" : "s")})",
         };
+        lines.AddRange(WindingAnalysisText.Phase(analysis(), d, phase.Index));
         return new HoverContent(span, $"phase {name}", lines);
     }
 
@@ -215,14 +217,14 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
 
     // ---- blocks --------------------------------------------------------------------------------
 
-    private static HoverContent? ForBlock(Compilation c, BlockSyntax block)
+    private static HoverContent? ForBlock(Compilation c, Func<AnalysisResult?> analysis, BlockSyntax block)
     {
         var name = block.Name?.Text ?? "";
         if (c.Design is not { } d) return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", [KeywordHelp.For(block.Keyword.Text) ?? ""]);
         var lines = block.Keyword.Text switch
         {
-            "machine" => MachineFacts(d),
-            "winding" => WindingFacts(d),
+            "machine" => MachineFacts(d, analysis()),
+            "winding" => WindingFacts(d, analysis()),
             "group" => GroupFacts(d, name),
             "drive" when d.Drives.FirstOrDefault(x => x.Span == block.Span) is { } drive => DriveFacts(d, drive),
             _ => [],
@@ -230,7 +232,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", lines);
     }
 
-    public static List<string> MachineFacts(WindingDesign d)
+    public static List<string> MachineFacts(WindingDesign d, AnalysisResult? analysis)
     {
         int p = d.PolePairs;
         var lines = new List<string>
@@ -246,10 +248,11 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         if (g.EffectiveMechanicalGap is { } gap) dims.Add($"gap {Numbers.Show(gap * 1000, 3)} mm");
         if (g.SlotPitch(d.Slots) is { } tau) dims.Add($"slot pitch {Numbers.Show(tau * 1000, 2)} mm");
         if (dims.Count > 0) lines.Add(string.Join(", ", dims));
+        lines.AddRange(WindingAnalysisText.Machine(analysis));
         return lines;
     }
 
-    public static List<string> WindingFacts(WindingDesign d)
+    public static List<string> WindingFacts(WindingDesign d, AnalysisResult? analysis)
     {
         var w = d.Winding;
         var lines = new List<string>
@@ -260,7 +263,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         if (pitches.Length > 0)
             lines.Add($"coil pitch {string.Join(", ", pitches)} slots (pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots)");
         lines.AddRange(SeriesTurns(d));
-        lines.AddRange(WindingAnalysisText.Lines(d));
+        lines.AddRange(WindingAnalysisText.Winding(analysis, d));
         return lines;
     }
 

@@ -59,6 +59,26 @@ public class HoverTests : IAsyncLifetime
         Assert.Contains("coil pitch 7 slots (pole pitch 9 slots)", text);
     }
 
+    /// <summary>
+    /// Closed form for a regular double-layer winding (Pyrhönen, Jokinen, Hrabovcová, Design of
+    /// Rotating Electrical Machines, ch. 2): q = 3, α = 20° electrical, y/τp = 7/9 give
+    /// kd1 = sin(qα/2)/(q sin(α/2)) = 0.9598, kp1 = sin(7/9 · 90°) = 0.9397, kw1 = 0.9019; the MMF
+    /// harmonic ν relative to the fundamental is kwν/(ν kw1): 7th 2.15 %, 17th (slot harmonic) 1/17 = 5.88 %.
+    /// Rotating-field theory (common practice): in a balanced three-phase winding the orders 6k+1
+    /// travel with the fundamental (forward), the orders 6k-1 against it.
+    /// </summary>
+    [Fact]
+    public async Task The_winding_shows_its_fundamental_winding_factor_and_main_harmonics()
+    {
+        var text = await HoverAt("winding main", into: 9);
+        Assert.Contains("kw1 = 0.9019 (distribution 0.9598 × pitch 0.9397)", text);
+        Assert.Contains("7: 2.15 % forward", text);
+        Assert.Contains("11: 1.37 % backward", text);
+        Assert.Contains("17: 5.88 % backward", text);
+        Assert.Contains("19: 5.26 % forward", text);
+        Assert.Contains("differential leakage", text);
+    }
+
     [Fact]
     public async Task The_machine_shows_slots_per_pole_and_phase_and_periodicity()
     {
