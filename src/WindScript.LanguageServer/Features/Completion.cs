@@ -145,11 +145,11 @@ public static class Completion
     private static void Waveform(CompletionContext x, Compilation c, int offset, List<JsonObject> items, bool balanced)
     {
         var last = x.Last!.Value;
-        if (last.Kind is TokenKind.Equals or TokenKind.Plus or TokenKind.Minus && !balanced && x.LastKeyword("sine", "dc", "at", "phase") is var k0 && (k0 == "" || last.Kind != TokenKind.Minus || EndsTerm(x)))
+        // A new term starts after '=' or after a '+' or '-' that follows a finished term.
+        if (!balanced && (last.Kind == TokenKind.Equals || last.Kind is TokenKind.Plus or TokenKind.Minus && EndsTerm(x)))
         {
             items.Add(Keyword("sine"));
             items.Add(Keyword("dc"));
-            if (last.Kind == TokenKind.Minus) Expression(x, c, offset, items, []);
             return;
         }
         string keyword = x.LastKeyword("sine", "dc", "peak", "rms", "at", "phase");
@@ -181,6 +181,7 @@ public static class Completion
         }
     }
 
+    /// <summary>True when the token before the last one ends a waveform term (a value, not a keyword awaiting one).</summary>
     private static bool EndsTerm(CompletionContext x) =>
         x.Statement.Count >= 2 && x.Statement[^2].Kind is TokenKind.Unit or TokenKind.Number or TokenKind.Word or TokenKind.RParen && x.Statement[^2].Text is not ("sine" or "dc" or "at" or "phase");
 

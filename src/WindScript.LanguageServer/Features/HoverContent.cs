@@ -308,8 +308,6 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
             lines.Add($"rotating field at {Numbers.Show(omega / (2 * Math.PI), 3)} Hz: ω/p = {Numbers.Show(mech, 2)} rad/s = {Numbers.Show(mech * 60 / (2 * Math.PI), 2)} rpm mechanical (p = {p})");
         }
         if (omegas.Length == 0 && drive.Currents.Any(x => !x.Components.IsEmpty)) lines.Add("direct current only: a standing field (speed 0)");
-        double sum = Enumerable.Range(0, 64).Max(i => Math.Abs(drive.CurrentsAt(i * 1e-3).Sum()));
-        if (!drive.Neutral && sum > 1e-6) lines.Add($"the phase currents do not sum to zero (up to {Numbers.Show(sum, 3)} A) and there is no neutral");
         return lines;
     }
 
