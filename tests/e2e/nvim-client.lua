@@ -2,7 +2,7 @@
 -- implementation), headless. Run by run.sh as:
 --   WINDSCRIPT_CMD="<server command>" E2E_FILE=<broken .wind> E2E_RESULT=<out file> \
 --     nvim --headless --clean -u NONE -c "luafile nvim-client.lua"
--- The file must contain "bore 210" without its unit (an error the server reports as WS2010).
+-- The file must contain a "bore N" line without its unit (an error the server reports as WS2010).
 local result_path = assert(os.getenv("E2E_RESULT"), "E2E_RESULT not set")
 local file = assert(os.getenv("E2E_FILE"), "E2E_FILE not set")
 local cmd = {}
@@ -45,7 +45,7 @@ local ok, err = pcall(function()
   check("diagnostics arrive after opening the file", got)
   local bore_line
   for i, text in ipairs(vim.api.nvim_buf_get_lines(bufnr, 0, -1, false)) do
-    if text:find("bore 210", 1, true) then bore_line = i - 1 end
+    if text:find("^%s*bore%s+[%d%.]+%s*$") then bore_line = i - 1 end
   end
   local found
   for _, d in ipairs(vim.diagnostic.get(bufnr)) do
@@ -53,16 +53,16 @@ local ok, err = pcall(function()
     if code == "WS2010" then found = d end
   end
   check("the missing unit is reported as WS2010", found ~= nil, vim.inspect(vim.diagnostic.get(bufnr)))
+  local bore_text = vim.api.nvim_buf_get_lines(bufnr, bore_line, bore_line + 1, false)[1]
+  local number_start, number_end = bore_text:find("[%d%.]+")
   if found then
-    local col = vim.api.nvim_buf_get_lines(bufnr, bore_line, bore_line + 1, false)[1]:find("210", 1, true) - 1
-    check("WS2010 points at '210' (line and columns)", found.lnum == bore_line and found.col == col and found.end_col == col + 3,
-      string.format("lnum %d col %d end_col %d, expected %d %d %d", found.lnum, found.col, found.end_col, bore_line, col, col + 3))
+    local col, end_col = number_start - 1, number_end
+    check("WS2010 points at the bore's number (line and columns)", found.lnum == bore_line and found.col == col and found.end_col == end_col,
+      string.format("lnum %d col %d end_col %d, expected %d %d %d", found.lnum, found.col, found.end_col, bore_line, col, end_col))
   end
 
   -- 2. Typing the unit (an incremental change from Neovim) clears the diagnostic.
-  local text = vim.api.nvim_buf_get_lines(bufnr, bore_line, bore_line + 1, false)[1]
-  local after = text:find("210", 1, true) + 2
-  vim.api.nvim_buf_set_text(bufnr, bore_line, after, bore_line, after, { " mm" })
+  vim.api.nvim_buf_set_text(bufnr, bore_line, number_end, bore_line, number_end, { " mm" })
   local cleared = vim.wait(20000, function()
     for _, d in ipairs(vim.diagnostic.get(bufnr)) do
       if (d.code or (d.user_data and d.user_data.lsp and d.user_data.lsp.code)) == "WS2010" then return false end
@@ -79,7 +79,7 @@ local ok, err = pcall(function()
   local hover = vim.lsp.buf_request_sync(bufnr, "textDocument/hover",
     { textDocument = { uri = vim.uri_from_bufnr(bufnr) }, position = { line = winding_line, character = 9 } }, 10000)
   local value = hover and hover[client_id] and hover[client_id].result and hover[client_id].result.contents.value or ""
-  check("hover on the winding shows its fundamental winding factor", value:find("kw1 = 0.9", 1, true) ~= nil, value)
+  check("hover on the winding shows its fundamental winding factor", value:find("kw1 = 0.", 1, true) ~= nil, value)
 
   -- 4. Formatting answers with edits (none: the file is canonical once fixed).
   local formatting = vim.lsp.buf_request_sync(bufnr, "textDocument/formatting",

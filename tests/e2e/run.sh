@@ -15,6 +15,8 @@ trap 'rm -rf "$work"' EXIT
 passed=0
 failed=0
 
+started=$SECONDS
+section() { echo "== $1 (at $((SECONDS - started)) s)"; }
 pass() { passed=$((passed + 1)); echo "  ok    $1"; }
 fail() { failed=$((failed + 1)); echo "  FAIL  $1"; }
 # Adds a client's own "name: N passed, N failed" line to the totals.
@@ -26,7 +28,7 @@ add_counts() {
   failed=$((failed + $(echo "$line" | sed -E 's/.* ([0-9]+) failed.*/\1/')))
 }
 
-echo "== tools"
+section "tools"
 missing=()
 command -v nvim >/dev/null || missing+=(neovim)
 command -v node >/dev/null || missing+=(nodejs)
@@ -38,7 +40,7 @@ if [ ${#missing[@]} -gt 0 ]; then
 fi
 echo "node $(node --version 2>/dev/null), $(nvim --version 2>/dev/null | head -1)"
 
-echo "== build windscript"
+section "build windscript"
 if timeout 300 dotnet build src/WindScript.Cli -c Release -o "$work/cli" >"$work/build.log" 2>&1; then
   pass "windscript builds"
 else
@@ -47,7 +49,7 @@ fi
 server="$work/cli/windscript"
 [ -x "$server" ] || server="dotnet $work/cli/windscript.dll"
 
-echo "== client 1: vscode-jsonrpc / vscode-languageserver-protocol (Node)"
+section "client 1: vscode-jsonrpc / vscode-languageserver-protocol (Node)"
 if (cd tests/e2e && timeout 180 npm ci --no-audit --no-fund >"$work/npm-e2e.log" 2>&1); then
   timeout 120 node tests/e2e/node-client.cjs $server 2>&1 | tee "$work/node.out"
   add_counts "$work/node.out" "the Node client"
@@ -55,8 +57,8 @@ else
   tail -20 "$work/npm-e2e.log"; fail "npm ci in tests/e2e"
 fi
 
-echo "== client 2: Neovim built-in LSP client (headless)"
-sed 's/bore 210 mm/bore 210/' examples/mill_fan_lap.wind >"$work/mill_fan_lap.wind"
+section "client 2: Neovim built-in LSP client (headless)"
+sed -E 's/^([[:space:]]*bore [0-9.]+) mm/\1/' examples/mill_fan_lap.wind >"$work/mill_fan_lap.wind"
 if command -v nvim >/dev/null; then
   (cd tests/e2e && WINDSCRIPT_CMD="$server" E2E_FILE="$work/mill_fan_lap.wind" E2E_RESULT="$work/nvim.out" \
     timeout 120 nvim --headless --clean -u NONE -c "luafile nvim-client.lua" </dev/null >"$work/nvim.log" 2>&1)
@@ -66,7 +68,7 @@ else
   fail "nvim is not installed"
 fi
 
-echo "== VS Code extension"
+section "VS Code extension"
 if (cd editors/vscode && timeout 240 npm ci --no-audit --no-fund >"$work/npm-vscode.log" 2>&1); then
   if (cd editors/vscode && npm run --silent compile >"$work/compile.log" 2>&1); then pass "extension type-checks and bundles"
   else cat "$work/compile.log"; fail "extension type-checks and bundles"; fi
@@ -82,5 +84,6 @@ else
   tail -20 "$work/npm-vscode.log"; fail "npm ci in editors/vscode"
 fi
 
+echo "e2e finished in $((SECONDS - started)) s"
 echo "$passed passed, $failed failed"
 [ "$failed" -eq 0 ]
