@@ -40,17 +40,22 @@ if [ ${#missing[@]} -gt 0 ]; then
 fi
 echo "node $(node --version 2>/dev/null), $(nvim --version 2>/dev/null | head -1)"
 
+# npm installs run in the background while the CLI builds.
+(cd tests/e2e && timeout 240 npm ci --no-audit --no-fund >"$work/npm-e2e.log" 2>&1) & npm_e2e=$!
+(cd editors/vscode && timeout 240 npm ci --no-audit --no-fund >"$work/npm-vscode.log" 2>&1) & npm_vscode=$!
+
 section "build windscript"
-if timeout 300 dotnet build src/WindScript.Cli -c Release -o "$work/cli" >"$work/build.log" 2>&1; then
+# The default (Debug) configuration: after 'dotnet test WindScript.sln' in .ci/run this is an up-to-date check.
+if timeout 300 dotnet build src/WindScript.Cli >"$work/build.log" 2>&1; then
   pass "windscript builds"
 else
   tail -30 "$work/build.log"; fail "windscript builds"
 fi
-server="$work/cli/windscript"
-[ -x "$server" ] || server="dotnet $work/cli/windscript.dll"
+server="$root/src/WindScript.Cli/bin/Debug/net10.0/windscript"
+[ -x "$server" ] || server="dotnet $root/src/WindScript.Cli/bin/Debug/net10.0/windscript.dll"
 
 section "client 1: vscode-jsonrpc / vscode-languageserver-protocol (Node)"
-if (cd tests/e2e && timeout 180 npm ci --no-audit --no-fund >"$work/npm-e2e.log" 2>&1); then
+if wait $npm_e2e; then
   timeout 120 node tests/e2e/node-client.cjs $server 2>&1 | tee "$work/node.out"
   add_counts "$work/node.out" "the Node client"
 else
@@ -69,7 +74,7 @@ else
 fi
 
 section "VS Code extension"
-if (cd editors/vscode && timeout 240 npm ci --no-audit --no-fund >"$work/npm-vscode.log" 2>&1); then
+if wait $npm_vscode; then
   if (cd editors/vscode && npm run --silent compile >"$work/compile.log" 2>&1); then pass "extension type-checks and bundles"
   else cat "$work/compile.log"; fail "extension type-checks and bundles"; fi
   if (cd editors/vscode && timeout 120 npx --no-install vsce package --allow-missing-repository --no-dependencies -o "$work/windscript.vsix" >"$work/vsce.log" 2>&1) \
