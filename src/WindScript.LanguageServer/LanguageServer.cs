@@ -70,15 +70,26 @@ public sealed class LanguageServer
         RunAsync(input, output, log, extraRequests: null, cancel);
 
     /// <summary>As above, with extra request handlers (tests use one that throws, to check isolation).</summary>
-    internal static async Task<int> RunAsync(Stream input, Stream output, TextWriter? log,
+    internal static Task<int> RunAsync(Stream input, Stream output, TextWriter? log,
         IReadOnlyDictionary<string, Func<JsonObject, JsonNode?>>? extraRequests, CancellationToken cancel)
     {
         var server = new LanguageServer(output, log);
         foreach (var (method, handler) in extraRequests ?? new Dictionary<string, Func<JsonObject, JsonNode?>>())
             server._requests[method] = handler;
         _ = Task.Run(() => server.ReadAllAsync(input, cancel), CancellationToken.None);
-        return await server.ServeAsync(cancel);
+        // The parser recurses per nested bracket and a stack overflow would end the process:
+        // handle messages on a thread with a generous stack (see NestingGuard for the bound).
+        var exit = new TaskCompletionSource<int>(TaskCreationOptions.RunContinuationsAsynchronously);
+        var thread = new Thread(() =>
+        {
+            try { exit.SetResult(server.Serve(cancel)); }
+            catch (Exception e) { exit.SetException(e); }
+        }, HandlerStackBytes) { IsBackground = true, Name = "windscript-lsp" };
+        thread.Start();
+        return exit.Task;
     }
+
+    private const int HandlerStackBytes = 64 * 1024 * 1024;
 
     // ---- transport ----------------------------------------------------------------------------
 
@@ -120,11 +131,11 @@ public sealed class LanguageServer
         }
     }
 
-    private async Task<int> ServeAsync(CancellationToken cancel)
+    private int Serve(CancellationToken cancel)
     {
         try
         {
-            while (await _inbox.Reader.WaitToReadAsync(cancel))
+            while (_inbox.Reader.WaitToReadAsync(cancel).AsTask().GetAwaiter().GetResult())
             {
                 while (_inbox.Reader.TryRead(out var incoming))
                 {
@@ -296,7 +307,7 @@ public sealed class LanguageServer
             }
             catch (Exception e)
             {
-                Log($"checking {uri} failed: {e}");
+                Log(e is RpcException ? $"{uri}: {e.Message}" : $"checking {uri} failed: {e}");
                 notification = DiagnosticConverter.Failure(document, e);
             }
             document.PublishedVersion = document.Version;

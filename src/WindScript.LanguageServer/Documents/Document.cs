@@ -1,4 +1,5 @@
 using WindScript.Analysis;
+using WindScript.LanguageServer.Rpc;
 
 namespace WindScript.LanguageServer.Documents;
 
@@ -20,7 +21,7 @@ public sealed class Document(string uri, int version, string text)
     /// <summary>The version whose diagnostics the client last received, or null.</summary>
     public int? PublishedVersion { get; set; }
 
-    public Compilation Compilation => _compilation ??= WindScript.Compilation.Compile(Text, Uri);
+    public Compilation Compilation => _compilation ??= Compile();
 
     /// <summary>The physics of the current design (winding factors, spectra), or null without a complete design.</summary>
     public AnalysisResult? Analysis
@@ -34,6 +35,14 @@ public sealed class Document(string uri, int version, string text)
 
     /// <summary>Hover shows the main harmonics, so orders up to the 25th electrical are plenty.</summary>
     private static readonly AnalysisOptions HoverAnalysis = new() { MaxElectricalOrder = 25 };
+
+    private Compilation Compile()
+    {
+        if (NestingGuard.TooDeep(Text))
+            throw new RpcException(RpcErrorCodes.RequestFailed,
+                $"this file nests brackets more than {NestingGuard.MaxDepth:N0} levels deep; it is not checked");
+        return WindScript.Compilation.Compile(Text, Uri);
+    }
 
     public void Update(int version, string text)
     {

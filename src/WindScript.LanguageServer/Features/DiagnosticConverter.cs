@@ -34,7 +34,7 @@ public static class DiagnosticConverter
             },
             ["severity"] = Lsp.DiagnosticSeverity.Error,
             ["source"] = Source,
-            ["message"] = $"internal error while checking this file ({e.GetType().Name}); please report it",
+            ["message"] = e is Rpc.RpcException ? e.Message : $"internal error while checking this file ({e.GetType().Name}); please report it",
         }),
     };
 

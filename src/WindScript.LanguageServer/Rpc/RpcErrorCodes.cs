@@ -9,6 +9,7 @@ public static class RpcErrorCodes
     public const int InvalidParams = -32602;
     public const int InternalError = -32603;
     public const int ServerNotInitialized = -32002;
+    public const int RequestFailed = -32803;
     public const int RequestCancelled = -32800;
 }
 

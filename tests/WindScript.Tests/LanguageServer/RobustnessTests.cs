@@ -111,6 +111,30 @@ public class RobustnessTests
         Assert.Equal(0, await client.ShutdownAndExitAsync());
     }
 
+    [Theory]
+    [InlineData(1_500)]    // deep but checked: within the guard
+    [InlineData(200_000)]  // would overflow the stack of a recursive parser: refused with one diagnostic
+    public async Task Deeply_nested_brackets_never_crash_the_server(int depth)
+    {
+        await using var client = await LspTestClient.StartAsync();
+        client.Open(Samples.Uri, "let a = " + new string('(', depth) + "1" + new string(')', depth) + "\n");
+        var diagnostics = await client.DiagnosticsAsync(Samples.Uri);
+        if (depth > WindScript.LanguageServer.Documents.NestingGuard.MaxDepth)
+        {
+            var only = Assert.Single(diagnostics)!;
+            Assert.Contains("not checked", (string?)only["message"]);
+            var hover = await client.RequestAsync("textDocument/hover", LspTestClient.At(Samples.Uri, 0, 4));
+            Assert.Equal(RpcErrorCodes.RequestFailed, (int?)hover["error"]!["code"]);
+        }
+        else
+        {
+            Assert.Contains(diagnostics, d => (string?)d!["code"] == "WS2003"); // 'a' unused: the file was checked
+        }
+        client.ChangeAll(Samples.Uri, 2, Samples.FanMotor);
+        Assert.Empty(await client.DiagnosticsAsync(Samples.Uri, 2));
+        Assert.Equal(0, await client.ShutdownAndExitAsync());
+    }
+
     [Fact]
     public async Task The_reader_reports_bad_headers_and_reads_on()
     {
