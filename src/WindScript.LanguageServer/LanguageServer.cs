@@ -51,6 +51,8 @@ public sealed class LanguageServer
             ["textDocument/completion"] = p => WithDocument(p, d => Completion.Handle(d, p)),
             ["textDocument/codeAction"] = p => WithDocument(p, d => CodeActions.Handle(d, p)),
             ["textDocument/semanticTokens/full"] = p => WithDocument(p, SemanticTokens.Handle),
+            ["textDocument/prepareRename"] = p => WithDocument(p, d => Rename.Prepare(d, p)),
+            ["textDocument/rename"] = p => WithDocument(p, d => Rename.Handle(d, p)),
         };
         _notifications = new(StringComparer.Ordinal)
         {

@@ -28,6 +28,7 @@ public static class ServerCapabilities
             ["documentHighlightProvider"] = true,
             ["documentSymbolProvider"] = true,
             ["documentFormattingProvider"] = true,
+            ["renameProvider"] = new JsonObject { ["prepareProvider"] = true },
             ["completionProvider"] = new JsonObject
             {
                 ["triggerCharacters"] = new JsonArray(":", "-"),

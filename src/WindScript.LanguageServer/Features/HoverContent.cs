@@ -261,7 +261,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         };
         var pitches = w.Coils.Select(k => k.PitchSlots(d.Slots)).Distinct().Order().ToArray();
         if (pitches.Length > 0)
-            lines.Add($"coil pitch {string.Join(", ", pitches)} slots (pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots)");
+            lines.Add($"coil pitch {string.Join(", ", pitches)} slot{(pitches is [1] ? "" : "s")} (pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots)");
         lines.AddRange(SeriesTurns(d));
         lines.AddRange(WindingAnalysisText.Winding(analysis, d));
         return lines;

@@ -134,6 +134,38 @@ public class FeatureTests
         Assert.Equal(new[] { 0, 0, 3, 0, 0, 0, 4, 1, 3, 3, 0, 4, 2, 1, 0, 0, 3, 7, 6, 0 }, data);
     }
 
+    [Fact]
+    public async Task Renaming_a_phase_changes_every_use_and_the_file_stays_clean()
+    {
+        await using var client = await OpenAsync(Samples.FanMotor);
+        var (line, col) = Samples.Find(Samples.FanMotor, "phases U V W");
+        var position = LspTestClient.At(Samples.Uri, line, col + 7);
+        var prepared = await client.ResultAsync("textDocument/prepareRename", position);
+        Assert.Equal("U", (string?)prepared!["placeholder"]);
+        position["newName"] = "A";
+        var edits = (await client.ResultAsync("textDocument/rename", position))!["changes"]![Samples.Uri]!.AsArray();
+        Assert.Equal(9, edits.Count); // the declaration, 6 pattern entries, the sequence, 'U = dc'
+        var renamed = edits.Reverse().Aggregate(Samples.FanMotor, (text, edit) => Apply(text, edit!));
+        Assert.Contains("phases A V W", renamed);
+        Assert.Contains("top: A A A -W -W -W V V V -A -A -A", renamed);
+        client.ChangeAll(Samples.Uri, 2, renamed);
+        Assert.Empty(await client.DiagnosticsAsync(Samples.Uri, 2));
+    }
+
+    [Theory]
+    [InlineData("coil")]   // reserved
+    [InlineData("2x")]     // not a name
+    [InlineData("n")]      // already a value's name
+    public async Task Renaming_to_an_invalid_or_taken_name_is_refused(string newName)
+    {
+        await using var client = await OpenAsync(Samples.FanMotor);
+        var (line, col) = Samples.Find(Samples.FanMotor, "let bore_d");
+        var position = LspTestClient.At(Samples.Uri, line, col + 5);
+        position["newName"] = newName;
+        var response = await client.RequestAsync("textDocument/rename", position);
+        Assert.Equal(WindScript.LanguageServer.Rpc.RpcErrorCodes.RequestFailed, (int?)response["error"]!["code"]);
+    }
+
     private static bool Inside(JsonNode inner, JsonNode outer) =>
         Compare(inner["start"]!, outer["start"]!) >= 0 && Compare(inner["end"]!, outer["end"]!) <= 0;
 

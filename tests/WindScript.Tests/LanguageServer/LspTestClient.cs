@@ -82,7 +82,7 @@ public sealed class LspTestClient : IAsyncDisposable
     }
 
     public void Notify(string method, JsonNode? parameters) =>
-        SendBody(new JsonObject { ["jsonrpc"] = "2.0", ["method"] = method, ["params"] = parameters }.ToJsonString());
+        SendBody(new JsonObject { ["jsonrpc"] = "2.0", ["method"] = method, ["params"] = parameters?.DeepClone() }.ToJsonString());
 
     /// <summary>Sends a request and waits for its response (the whole response object: result or error).</summary>
     public Task<JsonObject> RequestAsync(string method, JsonNode? parameters)
@@ -94,7 +94,7 @@ public sealed class LspTestClient : IAsyncDisposable
     public Task<JsonObject> RequestWithIdAsync(JsonNode id, string method, JsonNode? parameters)
     {
         var waiter = Expect(id);
-        SendBody(new JsonObject { ["jsonrpc"] = "2.0", ["id"] = id, ["method"] = method, ["params"] = parameters }.ToJsonString());
+        SendBody(new JsonObject { ["jsonrpc"] = "2.0", ["id"] = id, ["method"] = method, ["params"] = parameters?.DeepClone() }.ToJsonString());
         return WithTimeout(waiter, $"response to {method}");
     }
 
