@@ -1,1 +1,3 @@
-﻿Console.WriteLine("Hello, World!");
+using WindScript.Cli;
+
+return CliApp.Run(args, CliIO.Console);

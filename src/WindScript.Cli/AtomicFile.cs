@@ -1,0 +1,23 @@
+using System.Text;
+
+namespace WindScript.Cli;
+
+/// <summary>Writes a file so that it is either fully replaced or left untouched: temp file, then rename.</summary>
+public static class AtomicFile
+{
+    public static void WriteAllText(string path, string text)
+    {
+        var full = System.IO.Path.GetFullPath(path);
+        var dir = System.IO.Path.GetDirectoryName(full)!;
+        var temp = System.IO.Path.Combine(dir, $".{System.IO.Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
+        try
+        {
+            File.WriteAllText(temp, text, new UTF8Encoding(false));
+            File.Move(temp, full, overwrite: true);
+        }
+        finally
+        {
+            if (File.Exists(temp)) File.Delete(temp);
+        }
+    }
+}

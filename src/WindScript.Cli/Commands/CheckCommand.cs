@@ -1,0 +1,54 @@
+using System.CommandLine;
+using WindScript.Cli.Output;
+using WindScript.Diagnostics;
+
+namespace WindScript.Cli.Commands;
+
+/// <summary><c>windscript check FILE...</c>: report every diagnostic; exit 1 if any is an error.</summary>
+public static class CheckCommand
+{
+    public static Command Create(CliIO io)
+    {
+        var files = CommonOptions.Files("Winding files to check");
+        var format = CommonOptions.Format("text", "text", "json");
+        var warningsAsErrors = new Option<bool>("--warnings-as-errors") { Description = "Fail (exit 1) on warnings too" };
+        var command = new Command("check", "Check winding files and report problems with their exact place") { files, format, warningsAsErrors };
+        command.SetAction(parse => Run(io, parse.GetValue(files)!, parse.GetValue(format)!, parse.GetValue(warningsAsErrors)));
+        return command;
+    }
+
+    public static int Run(CliIO io, string[] paths, string format, bool warningsAsErrors)
+    {
+        var results = new List<(InputFile File, Compilation Compilation)>();
+        bool unreadable = false;
+        foreach (var path in paths)
+        {
+            if (InputFile.Read(path, io.In, io.Err) is not { } file) { unreadable = true; continue; }
+            results.Add((file, Compilation.Compile(file.Text, file.Path)));
+        }
+
+        if (format == "json")
+        {
+            using var stream = new MemoryStream();
+            using (var json = DiagnosticJson.CreateWriter(stream))
+            {
+                json.WriteStartObject();
+                json.WriteStartArray("diagnostics");
+                foreach (var (file, c) in results)
+                    foreach (var d in c.Diagnostics) DiagnosticJson.WriteOne(json, file.DisplayName, c.Source, d);
+                json.WriteEndArray();
+                json.WriteEndObject();
+            }
+            io.Out.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+        }
+        else
+        {
+            foreach (var (file, c) in results) DiagnosticText.Write(io.Out, file.DisplayName, c.Source, c.Diagnostics);
+        }
+
+        if (unreadable) return ExitCodes.Usage;
+        bool failed = results.Any(r => r.Compilation.Diagnostics.Any(d =>
+            d.Severity == Severity.Error || (warningsAsErrors && d.Severity == Severity.Warning)));
+        return failed ? ExitCodes.Findings : ExitCodes.Ok;
+    }
+}

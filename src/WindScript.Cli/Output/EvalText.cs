@@ -1,0 +1,92 @@
+using System.Globalization;
+using WindScript.Model;
+
+namespace WindScript.Cli.Output;
+
+/// <summary>The people-readable summary of an evaluated design (machine, phases, turns, slot layout).</summary>
+public static class EvalText
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public static void WriteSummary(TextWriter o, WindingDesign d)
+    {
+        o.WriteLine($"machine {d.Name}");
+        o.WriteLine($"  slots Q            {d.Slots}");
+        o.WriteLine($"  poles 2p           {d.Poles}");
+        o.WriteLine($"  phases m           {d.Phases.Length} ({string.Join(" ", d.Phases.Select(p => p.Name))})");
+        o.WriteLine($"  phase shift        {d.PhaseShiftDegrees.ToString("0.###", Inv)} deg electrical");
+        double q = (double)d.Slots / (d.Poles * d.Phases.Length);
+        o.WriteLine($"  slots/pole/phase q {Fraction(d.Slots, d.Poles * d.Phases.Length)}{(q % 1 == 0 ? "" : $" = {q.ToString("0.####", Inv)}")}");
+        WriteGeometry(o, d.Geometry, d.Slots);
+        o.WriteLine();
+        var w = d.Winding;
+        o.WriteLine($"winding {w.Name}");
+        o.WriteLine($"  layers             {w.Layers}");
+        o.WriteLine($"  coils              {w.Coils.Length}");
+        o.WriteLine($"  parallel paths     {w.Paths}");
+        var pitches = w.Coils.Select(c => c.PitchSlots(d.Slots)).Distinct().Order().ToArray();
+        if (pitches.Length > 0) o.WriteLine($"  coil pitch         {string.Join(", ", pitches)} slot{(pitches.Length == 1 && pitches[0] == 1 ? "" : "s")} (pole pitch {Fraction(d.Slots, d.Poles)} slots)");
+        o.WriteLine();
+        o.WriteLine("  phase  coils  turns  series turns");
+        for (int p = 0; p < d.Phases.Length; p++)
+        {
+            int coils = w.Coils.Count(c => c.Phase == p);
+            o.WriteLine($"  {d.Phases[p].Name,-5}  {coils,5}  {d.TotalTurns(p),5}  {d.SeriesTurns(p).ToString("0.##", Inv),12}");
+        }
+        o.WriteLine();
+        WriteLayout(o, d);
+        if (d.Defaults.Length > 0)
+        {
+            o.WriteLine();
+            o.WriteLine("defaults applied");
+            foreach (var text in d.Defaults) o.WriteLine($"  {text}");
+        }
+    }
+
+    private static void WriteGeometry(TextWriter o, Geometry g, int slots)
+    {
+        void Mm(string name, double? metres) { if (metres is { } v) o.WriteLine($"  {name,-18} {(v * 1000).ToString("0.###", Inv)} mm"); }
+        Mm("bore diameter", g.BoreDiameter);
+        Mm("stack length", g.StackLength);
+        Mm("air gap", g.Gap);
+        Mm("slot opening", g.SlotOpening);
+        Mm("rotor radius", g.RotorRadius);
+        Mm("slot pitch", g.SlotPitch(slots));
+        if (g.SkewSlots != 0) o.WriteLine($"  {"skew",-18} {g.SkewSlots.ToString("0.###", Inv)} slot pitches");
+        if (g.GapFluxDensity is { } b) o.WriteLine($"  {"gap flux density",-18} {b.ToString("0.###", Inv)} T (peak, fundamental)");
+    }
+
+    /// <summary>The slot layout per layer, in rows of at most 24 slots.</summary>
+    public static void WriteLayout(TextWriter o, WindingDesign d)
+    {
+        var layout = SlotLayout.From(d);
+        string[] layerNames = d.Winding.Layers == 1 ? ["slot"] : ["top", "bottom"];
+        var labels = new string[layout.Layers, d.Slots];
+        int width = 3;
+        for (int l = 0; l < layout.Layers; l++)
+            for (int s = 1; s <= d.Slots; s++)
+                width = Math.Max(width, (labels[l, s - 1] = layout.Label(s, l, d.Phases)).Length);
+        width++;
+        o.WriteLine("slot layout (+ go side, - return side)");
+        const int perRow = 24;
+        for (int from = 1; from <= d.Slots; from += perRow)
+        {
+            int to = Math.Min(d.Slots, from + perRow - 1);
+            o.Write($"  {"slot",-7}");
+            for (int s = from; s <= to; s++) o.Write(s.ToString(Inv).PadLeft(width));
+            o.WriteLine();
+            for (int l = 0; l < layout.Layers; l++)
+            {
+                o.Write($"  {layerNames[l],-7}");
+                for (int s = from; s <= to; s++) o.Write(labels[l, s - 1].PadLeft(width));
+                o.WriteLine();
+            }
+        }
+    }
+
+    private static string Fraction(int num, int den)
+    {
+        long g = WindingDesign.Gcd(num, den);
+        return den / g == 1 ? (num / g).ToString(Inv) : $"{num / g}/{den / g}";
+    }
+}

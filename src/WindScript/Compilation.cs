@@ -1,0 +1,48 @@
+using WindScript.Diagnostics;
+using WindScript.Model;
+using WindScript.Semantics;
+using WindScript.Syntax;
+using WindScript.Text;
+
+namespace WindScript;
+
+/// <summary>
+/// The whole pipeline for one file: text -> syntax -> semantic model -> winding design ->
+/// diagnostics. This is the entry point for the CLI, the language server and library users.
+/// </summary>
+public sealed class Compilation
+{
+    private Compilation(SyntaxTree syntax, Evaluator.Result semantics, IReadOnlyList<Diagnostic> diagnostics)
+    {
+        Syntax = syntax;
+        Design = semantics.Design;
+        Semantics = semantics.Model;
+        Diagnostics = diagnostics;
+    }
+
+    public SyntaxTree Syntax { get; }
+
+    public SourceText Source => Syntax.Source;
+
+    /// <summary>The evaluated machine and winding, or null if the file lacks what one needs.</summary>
+    public WindingDesign? Design { get; }
+
+    public SemanticModel Semantics { get; }
+
+    /// <summary>Every diagnostic, in source order.</summary>
+    public IReadOnlyList<Diagnostic> Diagnostics { get; }
+
+    public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
+
+    public static Compilation Compile(string text, string path = "") => Compile(new SourceText(text, path));
+
+    public static Compilation Compile(SourceText source)
+    {
+        var syntax = SyntaxTree.Parse(source);
+        var semantics = Evaluator.Evaluate(syntax);
+        var all = new List<Diagnostic>(syntax.Diagnostics);
+        all.AddRange(semantics.Diagnostics);
+        all.Sort((a, b) => a.Span.Start != b.Span.Start ? a.Span.Start.CompareTo(b.Span.Start) : string.CompareOrdinal(a.Code, b.Code));
+        return new Compilation(syntax, semantics, all);
+    }
+}

@@ -1,0 +1,21 @@
+namespace WindScript.Diagnostics;
+
+public static partial class DiagnosticCatalog
+{
+    public static readonly DiagnosticDescriptor SyntaxError = new(
+        "WS1001", Severity.Error, "Syntax error",
+        """
+        The line does not follow the grammar of WindScript (grammar/windscript.ebnf). The message
+        says what was expected at the marked place. Each statement stands on its own line; the
+        checker skips the rest of a broken line (or the whole braced body it opened) and carries
+        on, so every other line is still checked.
+        """);
+
+    public static readonly DiagnosticDescriptor UnclosedBlock = new(
+        "WS1002", Severity.Error, "Block not closed",
+        """
+        A block (machine, winding, group, drive or a for loop) was opened with '{' but the file
+        ended before its closing '}'. Everything after the opening brace was read as part of the
+        block. Add the missing '}' where the block should end.
+        """);
+}

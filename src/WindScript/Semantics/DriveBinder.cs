@@ -1,0 +1,138 @@
+using System.Collections.Immutable;
+using WindScript.Diagnostics;
+using WindScript.Model;
+using WindScript.Syntax;
+using WindScript.Units;
+
+namespace WindScript.Semantics;
+
+/// <summary>
+/// Reads a drive block into one current waveform per phase. A sinusoid is i = Î·cos(ωt + φ);
+/// an rms amplitude is converted to the peak (Î = √2·I_rms); a balanced set gives the phases
+/// in the stated sequence time shifts of 0, -δ, -2δ, ... where δ is the machine's phase shift.
+/// </summary>
+internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator evaluator, SemanticModel model, PhaseTable phases, double phaseShiftDegrees)
+{
+    public Drive Bind(BlockSyntax block, Scope parent)
+    {
+        var scope = new Scope(parent);
+        int m = phases.Phases.Count;
+        var components = new List<CurrentComponent>[m];
+        var assigned = new Syntax.NameSyntax?[m];
+        var spans = new Text.TextSpan[m];
+        for (int k = 0; k < m; k++) components[k] = [];
+        bool neutral = false;
+        ImmutableArray<int> sequence = [];
+
+        foreach (var statement in block.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax let:
+                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+                    break;
+                case FlagSyntax { Keyword.Text: "neutral" }:
+                    neutral = true;
+                    break;
+                case PhaseCurrentSyntax current:
+                    if (phases.Resolve(current.Phase) is not { } k) break;
+                    if (!MarkAssigned(k, current.Phase, assigned)) break;
+                    spans[k] = current.Span;
+                    foreach (var term in current.Terms)
+                        if (BindTerm(term.Term, scope) is { } c)
+                            components[k].Add(term.Negated ? c with { Peak = -c.Peak } : c);
+                    break;
+                case BalancedSyntax balanced:
+                    sequence = BindBalanced(balanced, scope, components, assigned, spans);
+                    break;
+                default:
+                    BlockReader.ReportMisplaced(diagnostics, statement, "a drive block");
+                    break;
+            }
+        }
+
+        return new Drive
+        {
+            Name = block.Name?.Text ?? "",
+            Currents = [.. Enumerable.Range(0, m).Select(k => new PhaseCurrent(k, [.. components[k]], spans[k]))],
+            Neutral = neutral,
+            Sequence = sequence,
+            Span = block.Span,
+            NameSpan = block.Name?.Span ?? block.Keyword.Span,
+        };
+    }
+
+    private bool MarkAssigned(int phase, Syntax.NameSyntax at, Syntax.NameSyntax?[] assigned)
+    {
+        if (assigned[phase] is { } first)
+        {
+            diagnostics.Add(DiagnosticCatalog.DuplicateName.At(at.Span, $"phase '{at.Text}' is already driven in this drive")
+                with { Related = [new RelatedSpan(first.Span, "first driven here")] });
+            return false;
+        }
+        assigned[phase] = at;
+        return true;
+    }
+
+    private ImmutableArray<int> BindBalanced(BalancedSyntax balanced, Scope scope, List<CurrentComponent>[] components,
+        Syntax.NameSyntax?[] assigned, Text.TextSpan[] spans)
+    {
+        var order = new List<int>();
+        foreach (var name in balanced.Sequence)
+        {
+            if (phases.Resolve(name) is not { } k) return [];
+            if (order.Contains(k))
+            {
+                diagnostics.Add(DiagnosticCatalog.InvalidSequence, name.Span, $"phase '{name.Text}' appears twice in the sequence");
+                return [];
+            }
+            order.Add(k);
+        }
+        if (order.Count != phases.Phases.Count)
+        {
+            var missing = phases.Phases.Where(p => !order.Contains(p.Index)).Select(p => p.Name);
+            diagnostics.Add(DiagnosticCatalog.InvalidSequence, balanced.SequenceKeyword.Span.Cover(balanced.Sequence[^1].Span),
+                $"the sequence must name every phase once; missing: {string.Join(" ", missing)}");
+            return [];
+        }
+        if (BindTerm(balanced.Wave, scope) is not { } wave) return [.. order];
+        double delta = phaseShiftDegrees * Math.PI / 180;
+        for (int j = 0; j < order.Count; j++)
+        {
+            int k = order[j];
+            if (!MarkAssigned(k, balanced.Sequence[j], assigned)) continue;
+            spans[k] = balanced.Span;
+            components[k].Add(wave with { PhaseAngle = wave.PhaseAngle - j * delta });
+        }
+        return [.. order];
+    }
+
+    private CurrentComponent? BindTerm(WaveTermSyntax term, Scope scope)
+    {
+        switch (term)
+        {
+            case DcTermSyntax dc:
+                return evaluator.EvaluateAs(dc.Current, scope, Dimension.CurrentDim, "a current") is { } i
+                    ? new CurrentComponent(i, 0, 0, dc.Span) : null;
+            case SineTermSyntax sine:
+                var amplitude = evaluator.EvaluateAs(sine.Amplitude, scope, Dimension.CurrentDim, "a current amplitude");
+                var omega = evaluator.EvaluateAs(sine.Frequency, scope, Dimension.AngularFrequency, "a frequency");
+                double phase = 0;
+                if (sine.Phase is { } p)
+                {
+                    if (evaluator.EvaluateAs(p, scope, Dimension.AngleDim, "a phase angle") is not { } ph) return null;
+                    phase = ph;
+                }
+                if (omega is { } w && w <= 0)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidCount, sine.Frequency.Span, "a sinusoid's frequency must be greater than zero (use 'dc' for direct current)");
+                    return null;
+                }
+                if (amplitude is not { } a || omega is not { } o) return null;
+                double peak = sine.Measure.Text == "rms" ? a * Math.Sqrt(2) : a;
+                return new CurrentComponent(peak, o, phase, sine.Span);
+            default:
+                return null;
+        }
+    }
+}

@@ -1,0 +1,156 @@
+using System.Collections.Immutable;
+using WindScript.Diagnostics;
+using WindScript.Model;
+using WindScript.Syntax;
+using WindScript.Text;
+
+namespace WindScript.Semantics;
+
+/// <summary>
+/// The semantic pass: resolves names, checks units and evaluates expressions, loops and
+/// patterns into an immutable <see cref="WindingDesign"/>. It runs on whatever parsed, so a
+/// file with syntax errors still gets every other check.
+/// </summary>
+public static class Evaluator
+{
+    public sealed record Result(WindingDesign? Design, SemanticModel Model, IReadOnlyList<Diagnostic> Diagnostics);
+
+    public static Result Evaluate(SyntaxTree tree)
+    {
+        var diagnostics = new DiagnosticBag();
+        var model = new SemanticModel();
+        var evaluator = new ExpressionEvaluator(diagnostics);
+        var budget = new ExpansionBudget(diagnostics);
+        var defaults = new List<string>();
+        var top = new Scope(null);
+
+        BlockSyntax? machineBlock = null, windingBlock = null;
+        var driveBlocks = new List<BlockSyntax>();
+        foreach (var statement in Flatten(tree.Root.Statements))
+        {
+            switch (statement)
+            {
+                case LetSyntax let:
+                    LetBinder.Bind(let, top, evaluator, diagnostics, model);
+                    break;
+                case BlockSyntax { Keyword.Text: "machine" } b:
+                    if (machineBlock is null) machineBlock = b;
+                    else diagnostics.Add(DiagnosticCatalog.MoreThanOne, b.Keyword.Span, "a file describes one machine; this is a second machine block");
+                    break;
+                case BlockSyntax { Keyword.Text: "winding" } b:
+                    if (windingBlock is null) windingBlock = b;
+                    else diagnostics.Add(DiagnosticCatalog.MoreThanOne, b.Keyword.Span, "a file describes one winding; this is a second winding block");
+                    break;
+                case BlockSyntax { Keyword.Text: "drive" } b:
+                    driveBlocks.Add(b);
+                    break;
+                default:
+                    BlockReader.ReportMisplaced(diagnostics, statement, "the top level of a file (put it in a machine, winding or drive block)");
+                    break;
+            }
+        }
+
+        var machine = new MachineFacts();
+        if (machineBlock is null)
+            diagnostics.Add(DiagnosticCatalog.MissingDeclaration, new TextSpan(0, 0), "this file has no machine block (slots, poles, phases)");
+        else
+        {
+            machine = new MachineBinder(diagnostics, evaluator, model).Bind(machineBlock, top);
+            model.Define(machine.Name, SymbolKind.Machine, machineBlock.Name?.Span ?? machineBlock.Keyword.Span);
+            // A property whose line did not parse was reported already; do not call it missing.
+            var brokenLines = machineBlock.Body.OfType<ErrorStatementSyntax>()
+                .Select(e => tree.Source.Slice(e.Span).Split([' ', ':', '\t', '\r', '\n'])[0]).ToHashSet();
+            void Require(bool present, string keyword, string what)
+            {
+                if (!present && !brokenLines.Contains(keyword)) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
+            }
+            Require(machine.Slots is not null || machine.SlotsSpan != default, "slots", "its slot count ('slots')");
+            Require(machine.Poles is not null || machine.PolesSpan != default, "poles", "its pole count ('poles')");
+            Require(!machine.Phases.IsDefaultOrEmpty || machine.PhasesSpan != default, "phases", "its phases ('phases U V W')");
+        }
+        evaluator.Slots = machine.Slots ?? 0;
+
+        int m = machine.Phases.IsDefault ? 0 : machine.Phases.Length;
+        double shift = machine.PhaseShiftDegrees ?? DefaultPhaseShift(m);
+        if (machine.PhaseShiftDegrees is null && m >= 2)
+            defaults.Add($"phase shift {shift:0.###} deg electrical between successive phases ({(m == 2 ? "90 deg for two phases" : "360/m")})");
+
+        var phases = new PhaseTable(machine.Phases.IsDefault ? [] : machine.Phases, model, diagnostics);
+        Winding? winding = null;
+        if (windingBlock is null)
+            diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock?.Keyword.Span ?? new TextSpan(0, 0), "this file has no winding block");
+        else
+        {
+            winding = new WindingBinder(diagnostics, evaluator, model, machine, phases, budget, defaults).Bind(windingBlock, top);
+            if (windingBlock.Name is { } wn) model.Define(wn.Text, SymbolKind.Winding, wn.Span);
+        }
+
+        var drives = ImmutableArray.CreateBuilder<Drive>();
+        var driveNames = new Dictionary<string, TextSpan>();
+        foreach (var block in driveBlocks)
+        {
+            if (block.Name is { } name)
+            {
+                if (driveNames.TryGetValue(name.Text, out var first))
+                    diagnostics.Add(DiagnosticCatalog.DuplicateName.At(name.Span, $"drive '{name.Text}' is already defined")
+                        with { Related = [new RelatedSpan(first, "first defined here")] });
+                else driveNames[name.Text] = name.Span;
+                model.Define(name.Text, SymbolKind.Drive, name.Span);
+            }
+            drives.Add(new DriveBinder(diagnostics, evaluator, model, phases, shift).Bind(block, top));
+        }
+
+        foreach (var symbol in model.Symbols)
+            if (symbol.Kind == SymbolKind.Value && !symbol.Used)
+                diagnostics.Add(DiagnosticCatalog.UnusedName, symbol.Definition, $"'{symbol.Name}' is defined but never used");
+
+        WindingDesign? design = null;
+        if (machine.Slots is { } q && machine.Poles is { } poles && m > 0 && winding is not null)
+        {
+            design = new WindingDesign
+            {
+                Name = machine.Name,
+                Slots = q,
+                Poles = poles,
+                Phases = machine.Phases,
+                PhaseShiftDegrees = shift,
+                Geometry = machine.Geometry,
+                Winding = winding,
+                Drives = drives.ToImmutable(),
+                Defaults = [.. defaults.Distinct()],
+                MachineSpan = machine.Span,
+                SlotsSpan = machine.SlotsSpan,
+                PolesSpan = machine.PolesSpan,
+                PhasesSpan = machine.PhasesSpan,
+            };
+        }
+        return new Result(design, model, diagnostics.Items);
+    }
+
+    /// <summary>360/m electrical degrees; two phases are taken in quadrature (90 deg).</summary>
+    public static double DefaultPhaseShift(int phases) => phases switch
+    {
+        <= 1 => 0,
+        2 => 90,
+        _ => 360.0 / phases,
+    };
+
+    // A block left unclosed swallows the blocks after it; read those as top-level blocks again
+    // so that a missing '}' is one diagnostic, not one per following block.
+    private static IEnumerable<StatementSyntax> Flatten(IReadOnlyList<StatementSyntax> statements)
+    {
+        foreach (var statement in statements)
+        {
+            if (statement is BlockSyntax { Closed: false } block)
+            {
+                bool IsTopLevel(StatementSyntax s) => s is BlockSyntax { Keyword.Text: "machine" or "winding" or "drive" };
+                yield return block with { Body = block.Body.Where(s => !IsTopLevel(s)).ToArray() };
+                foreach (var inner in Flatten(block.Body.Where(IsTopLevel).ToArray())) yield return inner;
+            }
+            else
+            {
+                yield return statement;
+            }
+        }
+    }
+}

@@ -1,0 +1,239 @@
+using System.Globalization;
+using WindScript.Diagnostics;
+using WindScript.Syntax;
+using WindScript.Text;
+using WindScript.Units;
+
+namespace WindScript.Semantics;
+
+/// <summary>
+/// Evaluates expressions to quantities with dimensions. A failed evaluation reports once and
+/// yields null; callers skip what depends on it, so one mistake gives one diagnostic.
+/// </summary>
+internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
+{
+    /// <summary>Slot count for wrap(); 0 until the machine is known.</summary>
+    public int Slots { get; set; }
+
+    public Quantity? Evaluate(ExpressionSyntax expression, Scope scope)
+    {
+        switch (expression)
+        {
+            case NumberSyntax number:
+                if (number.Unit is null) return Quantity.Plain(number.Value);
+                var unit = UnitTable.Find(number.Unit.Text)!;
+                return new Quantity(number.Value * unit.ToSi, unit.Dimension);
+
+            case NameExpressionSyntax name:
+                return EvaluateName(name.Name, scope);
+
+            case ParenthesizedExpressionSyntax paren:
+                return Evaluate(paren.Inner, scope);
+
+            case UnaryExpressionSyntax unary:
+                return Evaluate(unary.Operand, scope) is { } operand ? operand with { Value = -operand.Value } : null;
+
+            case BinaryExpressionSyntax binary:
+                return EvaluateBinary(binary, scope);
+
+            case CallExpressionSyntax call:
+                return EvaluateCall(call, scope);
+
+            default:
+                return null;
+        }
+    }
+
+    private Quantity? EvaluateName(NameSyntax name, Scope scope)
+    {
+        var symbol = scope.Lookup(name.Text);
+        if (symbol is null)
+        {
+            diagnostics.Add(DiagnosticCatalog.UndefinedName, name.Span, $"'{name.Text}' is not defined");
+            return null;
+        }
+        symbol.AddReference(name.Span);
+        if (symbol.Kind == SymbolKind.LoopVariable)
+            return scope.TryGetLoopValue(name.Text, out double v) ? Quantity.Plain(v) : null;
+        if (symbol.Kind != SymbolKind.Value)
+        {
+            diagnostics.Add(DiagnosticCatalog.WrongDimension, name.Span, $"'{name.Text}' names a {symbol.Kind.ToString().ToLowerInvariant()}, not a value");
+            return null;
+        }
+        return symbol.Value;
+    }
+
+    private Quantity? EvaluateBinary(BinaryExpressionSyntax binary, Scope scope)
+    {
+        var left = Evaluate(binary.Left, scope);
+        var right = Evaluate(binary.Right, scope);
+        if (left is not { } l || right is not { } r) return null;
+        switch (binary.Operator)
+        {
+            case TokenKind.Plus:
+            case TokenKind.Minus:
+                if (l.Dimension != r.Dimension)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, binary.Span,
+                        $"cannot {(binary.Operator == TokenKind.Plus ? "add" : "subtract")} {r.Dimension.Describe()} {(binary.Operator == TokenKind.Plus ? "to" : "from")} {l.Dimension.Describe()}");
+                    return null;
+                }
+                return new Quantity(binary.Operator == TokenKind.Plus ? l.Value + r.Value : l.Value - r.Value, l.Dimension);
+            case TokenKind.Star:
+                return new Quantity(l.Value * r.Value, l.Dimension * r.Dimension);
+            case TokenKind.Slash:
+                if (r.Value == 0)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, binary.Right.Span, "division by zero");
+                    return null;
+                }
+                return new Quantity(l.Value / r.Value, l.Dimension / r.Dimension);
+            case TokenKind.Percent:
+                if (!l.Dimension.IsNone || !r.Dimension.IsNone || r.Value == 0)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, binary.Span, "'%' takes two plain numbers and a non-zero divisor");
+                    return null;
+                }
+                // A mathematical modulo: the result has the sign of the divisor, so (k - 1) % 36 >= 0.
+                double m = l.Value % r.Value;
+                if (m != 0 && (m < 0) != (r.Value < 0)) m += r.Value;
+                return Quantity.Plain(m);
+            default:
+                return null;
+        }
+    }
+
+    private Quantity? EvaluateCall(CallExpressionSyntax call, Scope scope)
+    {
+        var args = new Quantity[call.Arguments.Count];
+        bool ok = true;
+        for (int i = 0; i < args.Length; i++)
+        {
+            if (Evaluate(call.Arguments[i], scope) is { } q) args[i] = q; else ok = false;
+        }
+        string f = call.Function.Text;
+        int? arity = f switch
+        {
+            "wrap" or "abs" or "floor" or "ceil" or "round" or "sqrt" => 1,
+            "min" or "max" or "gcd" or "lcm" => 2,
+            _ => null,
+        };
+        if (arity is null)
+        {
+            diagnostics.Add(DiagnosticCatalog.UnknownFunction, call.Function.Span, $"there is no function '{f}'");
+            return null;
+        }
+        if (args.Length != arity)
+        {
+            diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, $"{f} takes {arity} argument{(arity == 1 ? "" : "s")}, not {args.Length}");
+            return null;
+        }
+        if (!ok) return null;
+        var a = args[0];
+        switch (f)
+        {
+            case "wrap":
+                if (!a.Dimension.IsNone || Slots <= 0)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, Slots <= 0 ? "wrap() needs the machine's slot count" : "wrap() takes a plain slot number");
+                    return null;
+                }
+                double w = (a.Value - 1) % Slots;
+                if (w < 0) w += Slots;
+                return Quantity.Plain(w + 1);
+            case "abs": return a with { Value = Math.Abs(a.Value) };
+            case "floor": return a with { Value = Math.Floor(a.Value) };
+            case "ceil": return a with { Value = Math.Ceiling(a.Value) };
+            case "round": return a with { Value = Math.Round(a.Value, MidpointRounding.AwayFromZero) };
+            case "sqrt":
+                if (a.Value < 0 || !a.Dimension.IsNone)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, "sqrt() takes a plain non-negative number");
+                    return null;
+                }
+                return Quantity.Plain(Math.Sqrt(a.Value));
+        }
+        var b = args[1];
+        if (a.Dimension != b.Dimension)
+        {
+            diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, $"{f}() needs two quantities of the same kind");
+            return null;
+        }
+        switch (f)
+        {
+            case "min": return a with { Value = Math.Min(a.Value, b.Value) };
+            case "max": return a with { Value = Math.Max(a.Value, b.Value) };
+        }
+        if (!a.Dimension.IsNone || a.Value != Math.Floor(a.Value) || b.Value != Math.Floor(b.Value))
+        {
+            diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, $"{f}() takes whole numbers");
+            return null;
+        }
+        long g = Model.WindingDesign.Gcd((long)a.Value, (long)b.Value);
+        return Quantity.Plain(f == "gcd" ? g : Model.WindingDesign.Lcm((long)a.Value, (long)b.Value));
+    }
+
+    // ---- typed evaluation with the diagnostics a designer needs ------------------------------
+
+    /// <summary>Evaluates and requires a dimension; a bare number gets "expected a length unit such as mm after 150".</summary>
+    public double? EvaluateAs(ExpressionSyntax expression, Scope scope, Dimension dimension, string what, params Dimension[] alternatives)
+    {
+        if (Evaluate(expression, scope) is not { } q) return null;
+        if (q.Dimension == dimension || alternatives.Contains(q.Dimension)) return q.Value;
+        if (q.Dimension.IsNone && IsBareNumber(expression))
+        {
+            string example = UnitTable.Example(dimension);
+            diagnostics.Add(DiagnosticCatalog.MissingUnit.At(expression.Span,
+                    $"expected {DescribeUnitKind(dimension)} unit such as {example} after {Literal(expression)}") with
+                {
+                    Fix = new CodeFix($"Add the unit '{example}'", [new TextEdit(new TextSpan(expression.Span.End, 0), " " + example)]),
+                });
+            return null;
+        }
+        diagnostics.Add(DiagnosticCatalog.WrongDimension, expression.Span,
+            $"{what} must be {dimension.Describe()}, but this is {q.Dimension.Describe()}");
+        return null;
+    }
+
+    /// <summary>Evaluates and requires a plain whole number within bounds.</summary>
+    public int? EvaluateInteger(ExpressionSyntax expression, Scope scope, string what, int min = int.MinValue, int max = int.MaxValue)
+    {
+        if (Evaluate(expression, scope) is not { } q) return null;
+        if (!q.Dimension.IsNone)
+        {
+            diagnostics.Add(DiagnosticCatalog.WrongDimension, expression.Span, $"{what} is a plain number, but this is {q.Dimension.Describe()}");
+            return null;
+        }
+        double rounded = Math.Round(q.Value);
+        if (Math.Abs(q.Value - rounded) > 1e-9 || rounded < min || rounded > max)
+        {
+            string range = min == int.MinValue ? "" : max == int.MaxValue ? $" of at least {min}" : $" from {min} to {max}";
+            diagnostics.Add(DiagnosticCatalog.InvalidCount, expression.Span, $"{what} must be a whole number{range}, not {Format(q.Value)}");
+            return null;
+        }
+        return (int)rounded;
+    }
+
+    private static bool IsBareNumber(ExpressionSyntax e) => e switch
+    {
+        NumberSyntax n => n.Unit is null,
+        UnaryExpressionSyntax u => IsBareNumber(u.Operand),
+        _ => false,
+    };
+
+    private static string Literal(ExpressionSyntax e) => e switch
+    {
+        NumberSyntax n => n.Literal,
+        UnaryExpressionSyntax u => "-" + Literal(u.Operand),
+        _ => "the value",
+    };
+
+    private static string DescribeUnitKind(Dimension d)
+    {
+        if (d == Dimension.SlotDim) return "a";
+        string kind = d.Describe();
+        return kind.StartsWith("a ", StringComparison.Ordinal) || kind.StartsWith("an ", StringComparison.Ordinal) ? kind : "a";
+    }
+
+    public static string Format(double v) => v.ToString("G10", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,126 @@
+using System.Collections.Immutable;
+using WindScript.Diagnostics;
+using WindScript.Model;
+using WindScript.Syntax;
+using WindScript.Text;
+using WindScript.Units;
+
+namespace WindScript.Semantics;
+
+/// <summary>What the machine block states, before defaults.</summary>
+internal sealed record MachineFacts
+{
+    public string Name { get; init; } = "";
+    public int? Slots { get; init; }
+    public int? Poles { get; init; }
+    public ImmutableArray<Phase> Phases { get; init; } = [];
+    public double? PhaseShiftDegrees { get; init; }
+    public Geometry Geometry { get; init; } = new();
+    public TextSpan Span { get; init; }
+    public TextSpan SlotsSpan { get; init; }
+    public TextSpan PolesSpan { get; init; }
+    public TextSpan PhasesSpan { get; init; }
+}
+
+/// <summary>Reads a machine block: counts, phases and core dimensions, each with its unit checked.</summary>
+internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluator evaluator, SemanticModel model)
+{
+    public MachineFacts Bind(BlockSyntax block, Scope parent)
+    {
+        var scope = new Scope(parent);
+        var facts = new MachineFacts { Name = block.Name?.Text ?? "", Span = block.Span };
+        var seen = new Dictionary<string, PropertySyntax>();
+        var geometry = new Geometry();
+        foreach (var statement in block.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax let:
+                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+                    break;
+                case PhasesSyntax phases:
+                    if (!facts.Phases.IsDefaultOrEmpty)
+                    {
+                        diagnostics.Add(DiagnosticCatalog.RepeatedProperty, phases.Keyword.Span, "'phases' is already given in this block");
+                        break;
+                    }
+                    facts = facts with { Phases = BindPhases(phases, scope), PhasesSpan = phases.Span };
+                    break;
+                case PropertySyntax p when IsMachineProperty(p.Keyword.Text):
+                    if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
+                    (facts, geometry) = BindProperty(p, scope, facts, geometry);
+                    break;
+                default:
+                    BlockReader.ReportMisplaced(diagnostics, statement, "a machine block");
+                    break;
+            }
+        }
+        return facts with { Geometry = geometry };
+    }
+
+    private static bool IsMachineProperty(string keyword) => keyword is "slots" or "poles" or "bore" or "stack" or "gap"
+        or "slot_opening" or "rotor_radius" or "skew" or "phase_shift" or "gap_flux_density";
+
+    private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
+    {
+        var list = ImmutableArray.CreateBuilder<Phase>();
+        foreach (var name in phases.Names)
+        {
+            if (list.Any(p => p.Name == name.Text))
+            {
+                diagnostics.Add(DiagnosticCatalog.DuplicateName, name.Span, $"phase '{name.Text}' is declared twice");
+                continue;
+            }
+            list.Add(new Phase(name.Text, list.Count, name.Span));
+            model.Define(name.Text, SymbolKind.Phase, name.Span);
+        }
+        return list.ToImmutable();
+    }
+
+    private (MachineFacts, Geometry) BindProperty(PropertySyntax p, Scope scope, MachineFacts facts, Geometry g)
+    {
+        double? Length(string what) => evaluator.EvaluateAs(p.Value, scope, Dimension.LengthDim, what);
+        double? Positive(double? v, string what)
+        {
+            if (v is { } x && x <= 0)
+            {
+                diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"{what} must be greater than zero");
+                return null;
+            }
+            return v;
+        }
+
+        switch (p.Keyword.Text)
+        {
+            case "slots":
+                return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, 100_000), SlotsSpan = p.Span }, g);
+            case "poles":
+                var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, 100_000);
+                if (poles is { } n && n % 2 != 0)
+                {
+                    diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"the pole count must be even (north and south poles pair up), not {n}");
+                    poles = null;
+                }
+                return (facts with { Poles = poles, PolesSpan = p.Span }, g);
+            case "bore": return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
+            case "stack": return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
+            case "gap": return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
+            case "slot_opening": return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
+            case "rotor_radius": return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case "gap_flux_density":
+                return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
+            case "phase_shift":
+                return (facts with { PhaseShiftDegrees = evaluator.EvaluateAs(p.Value, scope, Dimension.AngleDim, "the phase shift") * 180 / Math.PI }, g);
+            case "skew":
+                // In slot pitches, or as a mechanical angle (converted once the slot count is known).
+                if (evaluator.Evaluate(p.Value, scope) is { } q)
+                {
+                    if (q.Dimension == Dimension.SlotDim) return (facts, g with { SkewSlots = q.Value });
+                    if (q.Dimension == Dimension.AngleDim && facts.Slots is { } slots) return (facts, g with { SkewSlots = q.Value * slots / (2 * Math.PI) });
+                    evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");
+                }
+                return (facts, g);
+        }
+        return (facts, g);
+    }
+}

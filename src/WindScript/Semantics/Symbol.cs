@@ -1,0 +1,38 @@
+using WindScript.Text;
+using WindScript.Units;
+
+namespace WindScript.Semantics;
+
+public enum SymbolKind
+{
+    Value,        // let
+    LoopVariable,
+    Phase,
+    Machine,
+    Winding,
+    Group,
+    Drive,
+}
+
+/// <summary>A named thing in a file: where it is defined, where it is used, and its value if it has one.</summary>
+public sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
+{
+    private readonly List<TextSpan> _references = [];
+
+    public string Name { get; } = name;
+    public SymbolKind Kind { get; } = kind;
+    public TextSpan Definition { get; } = definition;
+
+    /// <summary>The evaluated value of a 'let' (null for other kinds, or when it did not evaluate).</summary>
+    public Quantity? Value { get; internal set; }
+
+    public IReadOnlyList<TextSpan> References => _references;
+
+    internal bool Used => _references.Count > 0;
+
+    internal void AddReference(TextSpan span)
+    {
+        // Loop bodies evaluate many times; record each place once.
+        if (_references.Count == 0 || _references[^1] != span && !_references.Contains(span)) _references.Add(span);
+    }
+}

@@ -1,0 +1,392 @@
+using System.Collections.Immutable;
+using WindScript.Diagnostics;
+using WindScript.Model;
+using WindScript.Syntax;
+using WindScript.Text;
+using WindScript.Units;
+
+namespace WindScript.Semantics;
+
+/// <summary>
+/// Reads a winding block into coils. Each coil group (the winding body itself, or a named
+/// 'group') may mix the three forms: explicit coils, slot patterns and loops.
+/// </summary>
+internal sealed class WindingBinder(
+    DiagnosticBag diagnostics, ExpressionEvaluator evaluator, SemanticModel model, MachineFacts machine,
+    PhaseTable phases, ExpansionBudget budget, List<string> defaults)
+{
+    private readonly List<Coil> _coils = [];
+    private int _layers = 2;
+
+    /// <summary>Settings a group inherits from its winding and may override.</summary>
+    private sealed record GroupSettings(string Name, int? Turns, int? Pitch, TextSpan PitchSpan);
+
+    public Winding? Bind(BlockSyntax block, Scope parent)
+    {
+        var scope = new Scope(parent);
+        var seen = new Dictionary<string, PropertySyntax>();
+        int? layers = null, turns = null, pitch = null, paths = null, seriesTurns = null, conductors = null;
+        TextSpan pathsSpan = default, seriesSpan = default, conductorsSpan = default, layersSpan = default, pitchSpan = default;
+
+        // Pass 1: values and properties, wherever they stand in the block.
+        foreach (var statement in block.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax let:
+                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+                    break;
+                case PropertySyntax p when p.Keyword.Text is "layers" or "turns" or "pitch" or "paths" or "series_turns" or "conductors_per_slot":
+                    if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
+                    switch (p.Keyword.Text)
+                    {
+                        case "layers": layers = evaluator.EvaluateInteger(p.Value, scope, "the number of layers", 1, 2); layersSpan = p.Span; break;
+                        case "turns": turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1); break;
+                        case "pitch": pitch = BindPitch(p, scope); pitchSpan = p.Span; break;
+                        case "paths": paths = evaluator.EvaluateInteger(p.Value, scope, "the number of parallel paths", 1); pathsSpan = p.Span; break;
+                        case "series_turns": seriesTurns = evaluator.EvaluateInteger(p.Value, scope, "series turns per phase", 1); seriesSpan = p.Span; break;
+                        case "conductors_per_slot": conductors = evaluator.EvaluateInteger(p.Value, scope, "conductors per slot", 1); conductorsSpan = p.Span; break;
+                    }
+                    break;
+            }
+        }
+
+        if (layers is null && !seen.ContainsKey("layers"))
+            diagnostics.Add(DiagnosticCatalog.MissingDeclaration, block.Keyword.Span, $"winding '{block.Name?.Text}' does not say how many layers it has (add 'layers 1' or 'layers 2')");
+        _layers = layers ?? 2;
+
+        // Pass 2: coils, in source order.
+        var settings = new GroupSettings("", turns, pitch, pitchSpan);
+        var groupNames = new Dictionary<string, TextSpan>();
+        BindCoilStatements(block.Body, scope, settings, allowGroups: true, groupNames, isWinding: true);
+
+        return new Winding
+        {
+            Name = block.Name?.Text ?? "",
+            Layers = _layers,
+            Paths = paths ?? 1,
+            Coils = [.. _coils],
+            DeclaredPitch = pitch,
+            DeclaredSeriesTurns = seriesTurns,
+            DeclaredConductorsPerSlot = conductors,
+            Span = block.Span,
+            PathsSpan = pathsSpan,
+            SeriesTurnsSpan = seriesSpan,
+            ConductorsPerSlotSpan = conductorsSpan,
+            LayersSpan = layersSpan,
+        };
+    }
+
+    private int? BindPitch(PropertySyntax p, Scope scope)
+    {
+        if (evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the coil pitch") is not { } y) return null;
+        if (Math.Abs(y - Math.Round(y)) > 1e-9 || y < 1 || (machine.Slots is { } q && y >= q))
+        {
+            diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span,
+                $"the coil pitch must be a whole number of slots from 1 to {(machine.Slots is { } q2 ? q2 - 1 : "Q - 1")}, not {ExpressionEvaluator.Format(y)}");
+            return null;
+        }
+        return (int)Math.Round(y);
+    }
+
+    private void BindCoilStatements(IReadOnlyList<StatementSyntax> body, Scope scope, GroupSettings settings, bool allowGroups,
+        Dictionary<string, TextSpan> groupNames, bool isWinding)
+    {
+        var patterns = new PatternCollector();
+        foreach (var statement in body)
+        {
+            switch (statement)
+            {
+                case LetSyntax or PropertySyntax when isWinding:
+                    break; // bound in pass 1
+                case CoilSyntax coil:
+                    BindCoil(coil, scope, settings);
+                    break;
+                case PatternSyntax pattern:
+                    CollectPattern(pattern, scope, patterns);
+                    break;
+                case ForSyntax loop:
+                    BindLoop(loop, scope, settings);
+                    break;
+                case BlockSyntax { Keyword.Text: "group" } group when allowGroups:
+                    BindGroup(group, scope, settings, groupNames);
+                    break;
+                default:
+                    BlockReader.ReportMisplaced(diagnostics, statement, isWinding ? "a winding block" : "a group");
+                    break;
+            }
+        }
+        BuildPatternCoils(patterns, settings);
+    }
+
+    private void BindGroup(BlockSyntax group, Scope parent, GroupSettings inherited, Dictionary<string, TextSpan> groupNames)
+    {
+        string name = group.Name?.Text ?? "";
+        if (group.Name is { } n)
+        {
+            if (groupNames.TryGetValue(name, out var first))
+                diagnostics.Add(DiagnosticCatalog.DuplicateName.At(n.Span, $"group '{name}' is already defined in this winding")
+                    with { Related = [new RelatedSpan(first, "first defined here")] });
+            else
+                groupNames[name] = n.Span;
+            model.Define(name, SymbolKind.Group, n.Span);
+        }
+        var scope = new Scope(parent);
+        var seen = new Dictionary<string, PropertySyntax>();
+        var settings = inherited with { Name = name };
+        var rest = new List<StatementSyntax>();
+        foreach (var statement in group.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax let:
+                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+                    break;
+                case PropertySyntax { Keyword.Text: "turns" } p when BlockReader.FirstTime(diagnostics, seen, p):
+                    settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1) };
+                    break;
+                case PropertySyntax { Keyword.Text: "pitch" } p when BlockReader.FirstTime(diagnostics, seen, p):
+                    settings = settings with { Pitch = BindPitch(p, scope), PitchSpan = p.Span };
+                    break;
+                case PropertySyntax { Keyword.Text: "turns" or "pitch" }:
+                    break; // repeated, reported above
+                default:
+                    rest.Add(statement);
+                    break;
+            }
+        }
+        BindCoilStatements(rest, scope, settings, allowGroups: false, groupNames, isWinding: false);
+    }
+
+    private void BindLoop(ForSyntax loop, Scope parent, GroupSettings settings)
+    {
+        var from = evaluator.EvaluateInteger(loop.From, parent, "the start of a range");
+        var to = evaluator.EvaluateInteger(loop.To, parent, "the end of a range");
+        int step = 1;
+        if (loop.Step is { } stepSyntax)
+        {
+            if (evaluator.EvaluateInteger(stepSyntax, parent, "the step of a range") is not { } s) return;
+            if (s == 0)
+            {
+                diagnostics.Add(DiagnosticCatalog.InvalidCount, stepSyntax.Span, "the step of a range cannot be 0 (the loop would never end)");
+                return;
+            }
+            step = s;
+        }
+        var loopScope = new Scope(parent);
+        var variable = model.Define(loop.Variable.Text, SymbolKind.LoopVariable, loop.Variable.Span);
+        loopScope.TryDeclare(variable);
+        if (from is not { } a || to is not { } b) return;
+        long count = (long)b - a;
+        count = count / step >= 0 ? count / step + 1 : 0;
+        if (!budget.Take(count, loop.Span with { Length = 3 })) return;
+        for (long i = 0; i < count; i++)
+        {
+            loopScope.SetLoopValue(loop.Variable.Text, a + i * step);
+            var bodyScope = new Scope(loopScope);
+            foreach (var statement in loop.Body)
+            {
+                switch (statement)
+                {
+                    case LetSyntax let: LetBinder.Bind(let, bodyScope, evaluator, diagnostics, model); break;
+                    case CoilSyntax coil: BindCoil(coil, bodyScope, settings); break;
+                    case ForSyntax inner: BindLoop(inner, bodyScope, settings); break;
+                    default:
+                        if (i == 0) BlockReader.ReportMisplaced(diagnostics, statement, "a 'for' loop");
+                        break;
+                }
+            }
+        }
+    }
+
+    private void BindCoil(CoilSyntax coil, Scope scope, GroupSettings settings)
+    {
+        var phase = phases.Resolve(coil.Phase);
+        int? go = BindSlot(coil.Go, scope);
+        int? ret = BindSlot(coil.Return, scope);
+        int? turns = coil.Turns is { } t ? evaluator.EvaluateInteger(t, scope, "turns per coil", 1) : settings.Turns;
+        if (coil.Turns is null && settings.Turns is null)
+            diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, coil.Span,
+                "this coil has no turns: add 'turns N' to it, or a 'turns' statement to its group or winding");
+        var (goLayer, returnLayer) = (0, _layers == 2 ? 1 : 0);
+        if (coil.Layer is { Text: "bottom" } layer)
+        {
+            if (_layers == 1)
+                diagnostics.Add(DiagnosticCatalog.InvalidCount, layer.Span, "a single-layer winding has no bottom layer");
+            else
+                (goLayer, returnLayer) = (1, 0);
+        }
+        if (go == ret && go is { } same)
+        {
+            diagnostics.Add(DiagnosticCatalog.CoilSidesCoincide, coil.Return.Span, $"this coil goes and returns in slot {same}");
+            return;
+        }
+        if (phase is null || go is null || ret is null || turns is null) return;
+        _coils.Add(new Coil(phase.Value, go.Value, ret.Value, goLayer, returnLayer, turns.Value, coil.Reversed ? -1 : 1, CurrentGroup(settings), coil.Span));
+    }
+
+    private static string CurrentGroup(GroupSettings settings) => settings.Name;
+
+    private int? BindSlot(ExpressionSyntax expression, Scope scope)
+    {
+        if (evaluator.EvaluateInteger(expression, scope, "a slot number") is not { } slot) return null;
+        if (machine.Slots is { } q && (slot < 1 || slot > q))
+        {
+            diagnostics.Add(DiagnosticCatalog.SlotOutOfRange, expression.Span, $"slot {slot} is out of range: the machine has slots 1 to {q}");
+            return null;
+        }
+        return slot;
+    }
+
+    // ---- slot patterns -------------------------------------------------------------------------
+
+    /// <summary>One pattern position after repeats: the phase (null for '_'), its sign, and the entry that wrote it.</summary>
+    private readonly record struct PatternCell(int? Phase, int Sign, PatternEntrySyntax Entry);
+
+    private sealed class PatternCollector
+    {
+        public readonly Dictionary<string, List<PatternCell>> Layers = new(StringComparer.Ordinal);
+        public readonly Dictionary<string, PatternSyntax> LastLine = new(StringComparer.Ordinal);
+        public readonly HashSet<string> Broken = [];
+    }
+
+    private void CollectPattern(PatternSyntax pattern, Scope scope, PatternCollector collector)
+    {
+        string layer = pattern.Layer.Text;
+        if (_layers == 1 && layer == "bottom")
+        {
+            diagnostics.Add(DiagnosticCatalog.MisplacedStatement, pattern.Layer.Span, "a single-layer winding has no bottom layer; list its slots with 'slots:'");
+            return;
+        }
+        if (_layers == 2 && layer == "slots")
+        {
+            diagnostics.Add(DiagnosticCatalog.MisplacedStatement, pattern.Layer.Span, "a double-layer winding lists its layers with 'top:' (and optionally 'bottom:')");
+            return;
+        }
+        if (_layers == 1) layer = "slots"; // 'top:' in a single-layer winding means its one layer
+        int repeat = 1;
+        if (pattern.Repeat is { } r)
+        {
+            if (evaluator.EvaluateInteger(r, scope, "a repeat count", 1) is not { } count)
+            {
+                collector.Broken.Add(layer);
+                return;
+            }
+            repeat = count;
+        }
+        if (!budget.Take((long)pattern.Entries.Count * repeat, pattern.Span)) return;
+        var cells = new List<PatternCell>(pattern.Entries.Count);
+        foreach (var entry in pattern.Entries)
+        {
+            int? phase = entry.Phase is { } name ? phases.Resolve(name) : null;
+            if (entry.Phase is not null && phase is null) collector.Broken.Add(layer);
+            cells.Add(new PatternCell(phase, entry.Reversed ? -1 : 1, entry));
+        }
+        if (!collector.Layers.TryGetValue(layer, out var list)) collector.Layers[layer] = list = [];
+        for (int k = 0; k < repeat; k++) list.AddRange(cells);
+        collector.LastLine[layer] = pattern;
+    }
+
+    private void BuildPatternCoils(PatternCollector collector, GroupSettings settings)
+    {
+        if (collector.Layers.Count == 0 || machine.Slots is not { } q) return;
+        foreach (var (layer, cells) in collector.Layers)
+        {
+            if (cells.Count != q)
+            {
+                var line = collector.LastLine[layer];
+                diagnostics.Add(DiagnosticCatalog.PatternLength, line.Layer.Span,
+                    $"the {layer} pattern covers {cells.Count} slot{(cells.Count == 1 ? "" : "s")}, but the machine has {q}");
+                collector.Broken.Add(layer);
+            }
+        }
+        if (collector.Broken.Count > 0) return;
+        if (settings.Turns is not { } turns)
+        {
+            var line = collector.LastLine.Values.First();
+            diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, line.Layer.Span, "the coils of this pattern have no turns: add a 'turns' statement to the group or winding");
+            return;
+        }
+        int y = settings.Pitch ?? DefaultPitch(q);
+        if (settings.Pitch is null && y > 0)
+            defaults.Add($"coil pitch {y} slots (no 'pitch' given: the longest pitch not exceeding the pole pitch)");
+        if (y <= 0) return;
+        int Wrap(int s) => (s - 1) % q + 1;
+
+        if (collector.Layers.TryGetValue("slots", out var single))
+        {
+            BuildSingleLayer(single, q, y, turns, settings.Name, Wrap);
+            return;
+        }
+        collector.Layers.TryGetValue("top", out var top);
+        collector.Layers.TryGetValue("bottom", out var bottom);
+        if (top is not null)
+        {
+            for (int s = 1; s <= q; s++)
+            {
+                var cell = top[s - 1];
+                if (cell.Phase is not { } phase) continue;
+                int ret = Wrap(s + y);
+                if (bottom is not null && (bottom[ret - 1].Phase != phase || bottom[ret - 1].Sign != -cell.Sign))
+                {
+                    diagnostics.Add(DiagnosticCatalog.PatternMismatch, bottom[ret - 1].Entry.Span,
+                        $"the bottom layer of slot {ret} should hold {Signed(-cell.Sign, phase)} to close the coil from top slot {s} (pitch {y})");
+                    continue;
+                }
+                _coils.Add(new Coil(phase, s, ret, 0, 1, turns, cell.Sign, settings.Name, cell.Entry.Span));
+            }
+        }
+        else if (bottom is not null)
+        {
+            for (int s = 1; s <= q; s++)
+            {
+                var cell = bottom[s - 1];
+                if (cell.Phase is not { } phase) continue;
+                int go = Wrap(s - y + q);
+                _coils.Add(new Coil(phase, go, s, 0, 1, turns, -cell.Sign, settings.Name, cell.Entry.Span));
+            }
+        }
+    }
+
+    private void BuildSingleLayer(List<PatternCell> cells, int q, int y, int turns, string group, Func<int, int> wrap)
+    {
+        var claimed = new bool[q];
+        var reported = new bool[q]; // entries already named as wrong are not read as go sides too
+        for (int s = 1; s <= q; s++)
+        {
+            var cell = cells[s - 1];
+            if (cell.Phase is not { } phase || cell.Sign < 0 || reported[s - 1]) continue;
+            int ret = wrap(s + y);
+            var other = cells[ret - 1];
+            if (other.Phase != phase || other.Sign != -1 || claimed[ret - 1])
+            {
+                diagnostics.Add(DiagnosticCatalog.PatternMismatch, other.Entry.Span,
+                    $"slot {ret} should hold -{Name(phase)} to close the coil from slot {s} (pitch {y})");
+                reported[ret - 1] = true;
+                continue;
+            }
+            claimed[ret - 1] = true;
+            _coils.Add(new Coil(phase, s, ret, 0, 0, turns, 1, group, cell.Entry.Span.Cover(other.Entry.Span)));
+        }
+        for (int s = 1; s <= q; s++)
+        {
+            var cell = cells[s - 1];
+            if (cell.Phase is { } phase && cell.Sign < 0 && !claimed[s - 1] && !Claimable(cells, s, y, q, wrap))
+                diagnostics.Add(DiagnosticCatalog.PatternMismatch, cell.Entry.Span,
+                    $"no coil returns in slot {s}: slot {wrap(s - y + q)} should hold {Name(phase)} (pitch {y})");
+        }
+    }
+
+    // A return side whose go side was itself wrong has been reported already.
+    private static bool Claimable(List<PatternCell> cells, int s, int y, int q, Func<int, int> wrap)
+    {
+        var go = cells[wrap(s - y + q) - 1];
+        return go.Sign > 0 && go.Phase is not null;
+    }
+
+    private int DefaultPitch(int q) => machine.Poles is { } poles ? Math.Max(1, q / poles) : 0;
+
+    private string Name(int phase) => phases.Phases[phase].Name;
+
+    private string Signed(int sign, int phase) => (sign < 0 ? "-" : "") + Name(phase);
+}

@@ -1,0 +1,6 @@
+using WindScript.Text;
+
+namespace WindScript.Syntax;
+
+/// <summary>The whole file: its top-level statements.</summary>
+public sealed record CompilationUnitSyntax(IReadOnlyList<StatementSyntax> Statements, TextSpan Span) : SyntaxNode(Span);

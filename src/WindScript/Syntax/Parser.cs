@@ -1,0 +1,314 @@
+using System.Globalization;
+using Pidgin;
+using Pidgin.Expression;
+using WindScript.Text;
+using static Pidgin.Parser;
+using static Pidgin.Parser<WindScript.Syntax.Token>;
+
+namespace WindScript.Syntax;
+
+/// <summary>
+/// The grammar of WindScript (grammar/windscript.ebnf is the normative text) as Pidgin parsers
+/// over tokens. Parsing never fails: a statement that does not parse becomes an
+/// <see cref="ErrorStatementSyntax"/> carrying its message, and the parser resumes at the next
+/// line (skipping a whole braced body if the bad line opened one), so every independent
+/// mistake in a file is reported once and nothing cascades.
+/// </summary>
+public static class Parser
+{
+    // The token array of the parse in progress: error recovery needs it to place messages.
+    [ThreadStatic] private static Token[]? _tokens;
+
+    public static CompilationUnitSyntax ParseTokens(Token[] tokens)
+    {
+        _tokens = tokens;
+        try
+        {
+            var result = File.Parse(tokens);
+            // The file parser cannot fail (every statement recovers), but stay total regardless.
+            return result.Success
+                ? result.Value
+                : new CompilationUnitSyntax([new ErrorStatementSyntax("could not read this file", tokens[0].Span, new TextSpan(0, tokens[^1].Span.End))], new TextSpan(0, tokens[^1].Span.End));
+        }
+        finally
+        {
+            _tokens = null;
+        }
+    }
+
+    // ---- tokens ---------------------------------------------------------------------------
+
+    private static Parser<Token, Token> Kind(TokenKind kind, string label) => Token(t => t.Kind == kind).Labelled(label);
+
+    private static Parser<Token, Token> Keyword(string word) => Token(t => t.Kind == TokenKind.Word && t.Text == word).Labelled($"'{word}'");
+
+    private static Parser<Token, Token> KeywordIn(IReadOnlySet<string> words, string label) =>
+        Token(t => t.Kind == TokenKind.Word && words.Contains(t.Text)).Labelled(label);
+
+    private static readonly Parser<Token, Token> NewLine = Kind(TokenKind.NewLine, "end of line");
+    private static readonly Parser<Token, Token> LBrace = Kind(TokenKind.LBrace, "'{'");
+    private static readonly Parser<Token, Token> RBrace = Kind(TokenKind.RBrace, "'}'");
+    private static readonly Parser<Token, Token> LParen = Kind(TokenKind.LParen, "'('");
+    private static readonly Parser<Token, Token> RParen = Kind(TokenKind.RParen, "')'");
+    private static readonly Parser<Token, Token> Colon = Kind(TokenKind.Colon, "':'");
+    private static readonly Parser<Token, Token> Comma = Kind(TokenKind.Comma, "','");
+    private static readonly Parser<Token, Token> EqualsSign = Kind(TokenKind.Equals, "'='");
+    private static readonly Parser<Token, Token> Arrow = Kind(TokenKind.Arrow, "'->'");
+    private static readonly Parser<Token, Token> DotDot = Kind(TokenKind.DotDot, "'..'");
+    private static readonly Parser<Token, Token> Minus = Kind(TokenKind.Minus, "'-'");
+    private static readonly Parser<Token, Token> Plus = Kind(TokenKind.Plus, "'+'");
+
+    private static readonly Parser<Token, NameSyntax> Name =
+        Token(t => t.Kind == TokenKind.Word && !Keywords.IsReserved(t.Text)).Labelled("a name").Select(NameSyntax.From);
+
+    private static readonly Parser<Token, Unit> EndOfStatement = OneOf(
+        NewLine.IgnoreResult(),
+        Lookahead(RBrace).IgnoreResult(),
+        Lookahead(Kind(TokenKind.End, "end of file")).IgnoreResult()).Labelled("end of line");
+
+    // ---- expressions ----------------------------------------------------------------------
+
+    private static readonly Parser<Token, ExpressionSyntax> NumberLiteral = Map(
+        (number, unit) => (ExpressionSyntax)new NumberSyntax(
+            double.Parse(number.Text, NumberStyles.Float, CultureInfo.InvariantCulture),
+            number.Text,
+            unit.HasValue ? KeywordSyntax.From(unit.Value) : null,
+            unit.HasValue ? number.Span.Cover(unit.Value.Span) : number.Span),
+        Kind(TokenKind.Number, "a number"),
+        Kind(TokenKind.Unit, "a unit").Optional());
+
+    private static readonly Parser<Token, ExpressionSyntax> Expression = Rec(() => ExpressionRule!);
+
+    private static readonly Parser<Token, ExpressionSyntax> NameOrCall = Map(
+        (name, args) => args.HasValue
+            ? new CallExpressionSyntax(name, args.Value.Items, name.Span.Cover(args.Value.Close.Span))
+            : (ExpressionSyntax)new NameExpressionSyntax(name),
+        Name,
+        Map((_, items, close) => (Items: (IReadOnlyList<ExpressionSyntax>)items.ToArray(), Close: close),
+            LParen, Expression.Separated(Comma), RParen).Optional());
+
+    private static readonly Parser<Token, ExpressionSyntax> Parenthesized = Map(
+        (open, inner, close) => (ExpressionSyntax)new ParenthesizedExpressionSyntax(inner, open.Span.Cover(close.Span)),
+        LParen, Expression, RParen);
+
+    private static readonly Parser<Token, ExpressionSyntax> Primary =
+        OneOf(NumberLiteral, NameOrCall, Parenthesized).Labelled("a value");
+
+    private static Parser<Token, Func<ExpressionSyntax, ExpressionSyntax, ExpressionSyntax>> Binary(TokenKind kind, string label) =>
+        Kind(kind, label).Select<Func<ExpressionSyntax, ExpressionSyntax, ExpressionSyntax>>(_ => (l, r) => new BinaryExpressionSyntax(kind, l, r));
+
+    private static readonly Parser<Token, ExpressionSyntax> ExpressionRule = ExpressionParser.Build(
+        Primary,
+        [
+            Operator.Prefix(Minus.Select<Func<ExpressionSyntax, ExpressionSyntax>>(t => e => new UnaryExpressionSyntax(TokenKind.Minus, e, t.Span.Cover(e.Span)))),
+            Operator.InfixL(Binary(TokenKind.Star, "'*'").Or(Binary(TokenKind.Slash, "'/'")).Or(Binary(TokenKind.Percent, "'%'"))),
+            Operator.InfixL(Binary(TokenKind.Plus, "'+'").Or(Binary(TokenKind.Minus, "'-'"))),
+        ]);
+
+    /// <summary>A single value with an optional sign: used inside waveform terms, where '+' joins terms.</summary>
+    private static readonly Parser<Token, ExpressionSyntax> SignedPrimary = Map(
+        (sign, value) => sign.HasValue ? new UnaryExpressionSyntax(TokenKind.Minus, value, sign.Value.Span.Cover(value.Span)) : value,
+        Minus.Optional(), Primary);
+
+    // ---- statements -----------------------------------------------------------------------
+
+    private static readonly Parser<Token, StatementSyntax> Let = Map(
+        (kw, name, _, value) => (StatementSyntax)new LetSyntax(name, value, kw.Span.Cover(value.Span)),
+        Keyword("let"), Name, EqualsSign, Expression);
+
+    private static readonly Parser<Token, StatementSyntax> Property = Map(
+        (kw, value) => (StatementSyntax)new PropertySyntax(KeywordSyntax.From(kw), value, kw.Span.Cover(value.Span)),
+        KeywordIn(Keywords.Properties, "a property such as slots, turns or pitch"), Expression);
+
+    private static readonly Parser<Token, StatementSyntax> Phases = Map(
+        (kw, names) =>
+        {
+            var list = names.ToArray();
+            return (StatementSyntax)new PhasesSyntax(KeywordSyntax.From(kw), list, kw.Span.Cover(list[^1].Span));
+        },
+        Keyword("phases"), Name.AtLeastOnce());
+
+    private static readonly Parser<Token, StatementSyntax> Flag =
+        KeywordIn(Keywords.Flags, "'neutral'").Select(kw => (StatementSyntax)new FlagSyntax(KeywordSyntax.From(kw), kw.Span));
+
+    private static readonly Parser<Token, PatternEntrySyntax> PatternEntry = OneOf(
+        Token(t => t.Kind == TokenKind.Word && t.Text == "_").Select(t => new PatternEntrySyntax(false, null, t.Span)),
+        Map((sign, name) => new PatternEntrySyntax(sign.HasValue && sign.Value.Kind == TokenKind.Minus, name,
+                sign.HasValue ? sign.Value.Span.Cover(name.Span) : name.Span),
+            Minus.Or(Plus).Optional(), Name)).Labelled("a phase such as U or -U, or '_'");
+
+    private static readonly Parser<Token, StatementSyntax> Pattern = Map(
+        (head, entries, repeat) =>
+        {
+            var list = entries.ToArray();
+            var end = repeat.HasValue ? repeat.Value.Span : list.Length > 0 ? list[^1].Span : head.Colon.Span;
+            return (StatementSyntax)new PatternSyntax(KeywordSyntax.From(head.Layer), list, repeat.GetValueOrDefault(), head.Layer.Span.Cover(end));
+        },
+        Try(Map((layer, colon) => (Layer: layer, Colon: colon), KeywordIn(Keywords.PatternLayers, "a layer such as top"), Colon)),
+        PatternEntry.Many(),
+        Keyword("repeat").Then(Expression).Optional());
+
+    private static readonly Parser<Token, KeywordSyntax> LayerName =
+        Keyword("top").Or(Keyword("bottom")).Labelled("'top' or 'bottom'").Select(KeywordSyntax.From);
+
+    private static readonly Parser<Token, (ExpressionSyntax? Turns, KeywordSyntax? Layer, TextSpan Span)> CoilOption = OneOf(
+        Map((kw, e) => ((ExpressionSyntax?)e, (KeywordSyntax?)null, kw.Span.Cover(e.Span)), Keyword("turns"), Expression),
+        Map((kw, l) => ((ExpressionSyntax?)null, (KeywordSyntax?)l, kw.Span.Cover(l.Span)), Keyword("layer"), LayerName));
+
+    private static readonly Parser<Token, StatementSyntax> Coil = Map(
+        (kw, sign, phase, go, ret, options) =>
+        {
+            var opts = options.ToArray();
+            var turns = opts.LastOrDefault(o => o.Turns is not null).Turns;
+            var layer = opts.LastOrDefault(o => o.Layer is not null).Layer;
+            var end = opts.Length > 0 ? opts[^1].Span : ret.Span;
+            return (StatementSyntax)new CoilSyntax(sign.HasValue, phase, go, ret, turns, layer, kw.Span.Cover(end));
+        },
+        Keyword("coil"),
+        Minus.Optional(),
+        Name.Before(Colon),
+        Expression.Before(Arrow),
+        Expression,
+        CoilOption.Many());
+
+    private static readonly Parser<Token, SineTermSyntax> Sine = Map(
+        (kw, amplitude, measure, _, frequency, phase) => new SineTermSyntax(amplitude, KeywordSyntax.From(measure), frequency, phase.GetValueOrDefault(),
+            kw.Span.Cover(phase.HasValue ? phase.Value.Span : frequency.Span)),
+        Keyword("sine"),
+        SignedPrimary,
+        Keyword("peak").Or(Keyword("rms")).Labelled("'peak' or 'rms'"),
+        Keyword("at"),
+        SignedPrimary,
+        Keyword("phase").Then(SignedPrimary).Optional());
+
+    private static readonly Parser<Token, WaveTermSyntax> Dc = Map(
+        (kw, value) => (WaveTermSyntax)new DcTermSyntax(value, kw.Span.Cover(value.Span)), Keyword("dc"), SignedPrimary);
+
+    private static readonly Parser<Token, WaveTermSyntax> WaveTerm =
+        OneOf(Sine.Select(s => (WaveTermSyntax)s), Dc);
+
+    private static readonly Parser<Token, StatementSyntax> PhaseCurrent = Map(
+        (head, first, rest) =>
+        {
+            var terms = new List<SignedTermSyntax> { new(false, first, first.Span) };
+            terms.AddRange(rest);
+            return (StatementSyntax)new PhaseCurrentSyntax(head, terms, head.Span.Cover(terms[^1].Span));
+        },
+        Try(Name.Before(EqualsSign)),
+        WaveTerm,
+        Map((op, term) => new SignedTermSyntax(op.Kind == TokenKind.Minus, term, op.Span.Cover(term.Span)), Plus.Or(Minus), WaveTerm).Many());
+
+    private static readonly Parser<Token, StatementSyntax> Balanced = Map(
+        (kw, wave, seqKw, names) =>
+        {
+            var list = names.ToArray();
+            return (StatementSyntax)new BalancedSyntax(wave, KeywordSyntax.From(seqKw), list, kw.Span.Cover(list[^1].Span));
+        },
+        Keyword("balanced"), Sine, Keyword("sequence"), Name.AtLeastOnce());
+
+    private static readonly Parser<Token, StatementSyntax> Statement = Rec(() => StatementRule!);
+
+    private static readonly Parser<Token, (IReadOnlyList<StatementSyntax> Body, bool Closed, TextSpan End)> Body = Map(
+        (open, statements, close) => ((IReadOnlyList<StatementSyntax>)statements.ToArray(), close.HasValue,
+            close.HasValue ? close.Value.Span : statements.LastOrDefault()?.Span ?? open.Span),
+        LBrace.Before(NewLine.SkipMany()),
+        Statement.Many(),
+        RBrace.Optional());
+
+    private static readonly Parser<Token, StatementSyntax> Block = Map(
+        (kw, name, body) => (StatementSyntax)new BlockSyntax(KeywordSyntax.From(kw), name, body.Body, body.Closed, kw.Span.Cover(body.End)),
+        KeywordIn(Keywords.Blocks, "a block such as machine, winding or drive"),
+        Name,
+        Body);
+
+    private static readonly Parser<Token, StatementSyntax> For = Map(
+        (kw, variable, from, to, step, body) =>
+            (StatementSyntax)new ForSyntax(variable, from, to, step.GetValueOrDefault(), body.Body, body.Closed, kw.Span.Cover(body.End)),
+        Keyword("for"),
+        Name.Before(Keyword("in")),
+        Expression.Before(DotDot),
+        Expression,
+        Keyword("step").Then(Expression).Optional(),
+        Body);
+
+    private static readonly Parser<Token, StatementSyntax> StatementCore = OneOf(
+        Let, Pattern, Property, Phases, Flag, Block, For, Coil, Balanced, PhaseCurrent);
+
+    // Skips the rest of a broken statement: to the end of its line, or over a whole braced
+    // body if the line opened one, so the body's lines are not misread as outer statements.
+    private static readonly Parser<Token, Unit> SkipBraced = Rec(() =>
+        LBrace.Then(OneOf(SkipBraced!, Token(t => t.Kind is not (TokenKind.RBrace or TokenKind.End or TokenKind.LBrace)).IgnoreResult()).SkipMany())
+            .Then(RBrace.Optional()).IgnoreResult());
+
+    private static readonly Parser<Token, Unit> SkipLine =
+        OneOf(SkipBraced, Token(t => t.Kind is not (TokenKind.NewLine or TokenKind.RBrace or TokenKind.End or TokenKind.LBrace)).IgnoreResult())
+            .SkipMany()
+            .Then(NewLine.SkipMany());
+
+    private static readonly Parser<Token, StatementSyntax> StatementRule =
+        Lookahead(Token(t => t.Kind is not (TokenKind.RBrace or TokenKind.End)))
+            .Then(Map((start, statement) => (start, statement), CurrentOffset, StatementCore.Before(EndOfStatement).Before(NewLine.SkipMany()))
+                .Select(x => x.statement)
+                .RecoverWith(error => Map((_, end) => MakeError(error, end), SkipLine, CurrentOffset)));
+
+    // A '}' with no block to close, at top level.
+    private static readonly Parser<Token, StatementSyntax> StrayBrace =
+        RBrace.Before(NewLine.SkipMany()).Select(t => (StatementSyntax)new ErrorStatementSyntax("this '}' closes no block", t.Span, t.Span));
+
+    private static readonly Parser<Token, CompilationUnitSyntax> File = Map(
+        (items, end) => new CompilationUnitSyntax(items.ToArray(), new TextSpan(0, end.Span.End)),
+        NewLine.SkipMany().Then(OneOf(Statement, StrayBrace).Many()),
+        Kind(TokenKind.End, "end of file"));
+
+    private static StatementSyntax MakeError(ParseError<Token> error, int endOffset)
+    {
+        var tokens = _tokens!;
+        int at = Math.Clamp(error.ErrorOffset, 0, tokens.Length - 1);
+        int first = StatementStart(tokens, at);
+        // An unknown word at the start of a line is the mistake, whatever follows it.
+        if (tokens[first].Kind == TokenKind.Word && !Keywords.IsReserved(tokens[first].Text) && tokens[first + 1].Kind != TokenKind.Equals)
+            at = first;
+        var found = tokens[at];
+        // Point at the offending token; at an end of line, point just after the last word so
+        // the caret sits where something is missing.
+        var errorSpan = found.Kind is TokenKind.NewLine or TokenKind.End && at > 0
+            ? new TextSpan(tokens[at - 1].Span.End, 0)
+            : found.Span;
+        int start = StatementStart(tokens, at);
+        int last = Math.Clamp(endOffset - 1, start, tokens.Length - 1);
+        var span = TextSpan.FromBounds(tokens[start].Span.Start, Math.Max(tokens[last].Span.End, errorSpan.End));
+        return new ErrorStatementSyntax(Describe(error, tokens, at, start), errorSpan, span);
+    }
+
+    private static int StatementStart(Token[] tokens, int at)
+    {
+        int i = Math.Min(at, tokens.Length - 1);
+        while (i > 0 && tokens[i - 1].Kind is not (TokenKind.NewLine or TokenKind.LBrace or TokenKind.RBrace)) i--;
+        return i;
+    }
+
+    private static string Describe(ParseError<Token> error, Token[] tokens, int at, int statementStart)
+    {
+        var found = tokens[at];
+        if (at == statementStart && found.Kind == TokenKind.Word && !Keywords.IsReserved(found.Text))
+            return $"'{found.Text}' does not start a statement; expected a keyword such as coil, turns, pitch or let, or a phase current 'U = ...'";
+        if (found.Kind == TokenKind.Bad)
+            return $"the character '{found.Text}' is not part of the language";
+        var expected = error.Expected
+            .Select(e => e.Label ?? (e.Tokens.IsDefaultOrEmpty ? null : string.Join(" ", e.Tokens.Select(t => t.ToString()))))
+            .Where(l => !string.IsNullOrEmpty(l))
+            .Distinct()
+            .Take(6)
+            .ToList();
+        string expectedText = expected.Count switch
+        {
+            0 => "something else",
+            1 => expected[0]!,
+            _ => string.Join(", ", expected.Take(expected.Count - 1)) + " or " + expected[^1],
+        };
+        string after = at > statementStart ? $" after '{tokens[at - 1].Text}'" : "";
+        return found.Kind is TokenKind.NewLine or TokenKind.End
+            ? $"expected {expectedText}{after}"
+            : $"expected {expectedText}{after}, but found {found}";
+    }
+}
