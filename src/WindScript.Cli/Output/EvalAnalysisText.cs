@@ -113,10 +113,18 @@ public static class EvalAnalysisText
         if (d.FundamentalField is { } b1) Row(o, "fundamental B1", $"{G(b1.FluxDensity)} T (MMF {G(b1.Mmf)} A)");
         if (d.BackEmfFrequencyHz is { } hz)
             Row(o, $"back-EMF at {G(hz)} Hz", string.Join("  ", r.Phases.Select(p => $"{p.Name} {G(d.BackEmfRms[p.Index])} V rms")));
-        o.WriteLine($"  {"v",5} {"n",8} {"f Hz",8} {"forward A",11} {"backward A",11} {"standing A",11} {"speed rpm",10}  kind");
+        o.WriteLine($"  {"v",5} {"n",8} {"f Hz",8} {"forward A",11} {"backward A",11} {"standing A",11} {"speed rpm",10}  kind (+ speed: towards higher slot numbers)");
         foreach (var w in d.Harmonics)
-            o.WriteLine($"  {N(w.Order),5} {F(w.ElectricalOrder, 3),8} {G(w.FrequencyHz),8} {G(w.Forward),11} {G(w.Backward),11} {G(w.Standing),11} {G(w.SpeedRpm),10}  {w.Kind.ToString().ToLowerInvariant()}");
+            o.WriteLine($"  {N(w.Order),5} {F(w.ElectricalOrder, 3),8} {G(w.FrequencyHz),8} {G(w.Forward),11} {G(w.Backward),11} {G(w.Standing),11} {Speed(w),10}  {w.Kind.ToString().ToLowerInvariant()}");
     }
+
+    // Signed by direction: forward waves move towards increasing slot number.
+    private static string Speed(TravellingWave w) => w.Kind switch
+    {
+        WaveKind.Backward => G(-w.SpeedRpm),
+        WaveKind.Pulsating or WaveKind.Elliptic => "+/-" + G(w.SpeedRpm),
+        _ => G(w.SpeedRpm),
+    };
 
     private static void Row(TextWriter o, string name, string value) => o.WriteLine($"  {name,-24} {value}");
 

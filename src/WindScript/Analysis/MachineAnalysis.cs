@@ -30,7 +30,6 @@ public static class MachineAnalysis
     {
         options ??= new AnalysisOptions();
         var notes = ImmutableArray.CreateBuilder<string>();
-        notes.AddRange(design.Defaults);
         var winding = WindingSpectrum.Of(design);
         var symmetry = WindingSymmetry.Of(design);
         var regular = RegularWinding.TryRecognise(design);
@@ -55,7 +54,7 @@ public static class MachineAnalysis
         var drives = design.Drives.Select(d => DriveOf(design, winding, d, options.Time, maxOrder, gap, backEmf)).ToImmutableArray();
 
         return new AnalysisResult(machine, summary, phases, double.IsFinite(leakage) ? leakage : null,
-            Balanced(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, notes.ToImmutable());
+            Balanced(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable());
     }
 
     private static ImmutableArray<PhaseAnalysis> Phases(WindingDesign design, WindingSpectrum winding, RegularWinding? regular, int maxOrder)

@@ -35,8 +35,11 @@ public static class TravellingWaves
         if (currents.IsDirect)
             return new TravellingWave(order, electrical, 0, 0, 0, (f + b).Magnitude, 0, 0, WaveKind.Standing);
         double speed = currents.Omega / order;
-        return new TravellingWave(order, electrical, currents.FrequencyHz, f.Magnitude, b.Magnitude, 0,
-            speed, speed * 60 / (2 * Math.PI), Classify(f.Magnitude, b.Magnitude));
+        double forward = f.Magnitude, backward = b.Magnitude, noise = 1e-12 * Math.Max(forward, backward);
+        if (forward < noise) forward = 0;      // cancellation leaves rounding residue, not a wave
+        if (backward < noise) backward = 0;
+        return new TravellingWave(order, electrical, currents.FrequencyHz, forward, backward, 0,
+            speed, speed * 60 / (2 * Math.PI), Classify(forward, backward));
     }
 
     private static WaveKind Classify(double forward, double backward)
