@@ -31,7 +31,7 @@ public static class TravellingWaves
     public static TravellingWave Describe(WindingSpectrum winding, CurrentPhasors currents, int order)
     {
         var (f, b) = At(winding, currents.Phasors.AsSpan(), order);
-        double electrical = (double)order / winding.PolePairs;
+        double electrical = MachineAnalysis.ElectricalOrder(order, winding.PolePairs);
         if (currents.IsDirect)
             return new TravellingWave(order, electrical, 0, 0, 0, (f + b).Magnitude, 0, 0, WaveKind.Standing);
         double speed = currents.Omega / order;
