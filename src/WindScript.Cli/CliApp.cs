@@ -15,6 +15,9 @@ public static class CliApp
                 CheckCommand.Create(io),
                 EvalCommand.Create(io),
                 FmtCommand.Create(io),
+                ExplainCommand.Create(io),
+                SynthCommand.Create(io),
+                SweepCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)

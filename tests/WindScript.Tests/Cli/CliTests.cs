@@ -21,7 +21,7 @@ public sealed class CliTests : IDisposable
     [Fact]
     public void Check_of_a_clean_file_exits_0_and_prints_nothing()
     {
-        var r = CliRunner.Run("check", Example("mill_fan_lap.wind"), Example("drone_9s8p.wind"));
+        var r = CliRunner.Run("check", Example("mill_fan_lap.wind"), Example("pump_skid_single_layer.wind"));
         Assert.True(r.Exit == 0, r.Err);
         Assert.Equal("", r.Out);
     }
@@ -72,7 +72,7 @@ public sealed class CliTests : IDisposable
     public void Usage_errors_exit_2()
     {
         Assert.Equal(2, CliRunner.Run("check", Path.Combine(_dir, "missing.wind")).Exit);
-        Assert.Equal(2, CliRunner.Run("check", "--format", "yaml", Example("drone_9s8p.wind")).Exit);
+        Assert.Equal(2, CliRunner.Run("check", "--format", "yaml", Example("drone_18s16p.wind")).Exit);
         Assert.Equal(2, CliRunner.Run("no-such-command").Exit);
         Assert.Equal(2, CliRunner.Run().Exit);
     }
@@ -104,7 +104,7 @@ public sealed class CliTests : IDisposable
         var r = CliRunner.Run("fmt", "--check", path);
         Assert.Equal(1, r.Exit);
         Assert.Equal("machine m{\nslots 6\n}\n", File.ReadAllText(path));
-        Assert.Equal(0, CliRunner.Run("fmt", "--check", Example("drone_9s8p.wind")).Exit);
+        Assert.Equal(0, CliRunner.Run("fmt", "--check", Example("drone_18s16p.wind")).Exit);
     }
 
     [Fact]
