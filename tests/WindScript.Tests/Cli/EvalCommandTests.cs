@@ -53,9 +53,17 @@ public class EvalCommandTests
         var wave = root.GetProperty("drives")[0].GetProperty("harmonics")[0];
         Assert.Equal("forward", wave.GetProperty("kind").GetString());
         Assert.Equal(JsonValueKind.Array, root.GetProperty("diagnostics").ValueKind);
-        // The drive 'reversed' runs the other way: its fundamental is a backward wave.
-        var reversed = root.GetProperty("drives").EnumerateArray().Single(d => d.GetProperty("name").GetString() == "reversed");
-        Assert.Equal("backward", reversed.GetProperty("harmonics").EnumerateArray().First(w => w.GetProperty("order").GetInt32() == 2).GetProperty("kind").GetString());
+    }
+
+    [Fact]
+    public void A_drive_in_the_reverse_sequence_makes_a_backward_fundamental()
+    {
+        var text = File.ReadAllText(Example("mill_fan_lap.wind")) + "\ndrive reversed {\n  balanced sine 38 A rms at 50 Hz sequence U W V\n}\n";
+        var r = CliRunner.RunWithInput(text, "eval", "-", "--format", "json");
+        var reversed = JsonDocument.Parse(r.Out).RootElement.GetProperty("drives").EnumerateArray().Single(d => d.GetProperty("name").GetString() == "reversed");
+        var fundamental = reversed.GetProperty("harmonics").EnumerateArray().First(w => w.GetProperty("order").GetInt32() == 2);
+        Assert.Equal("backward", fundamental.GetProperty("kind").GetString());
+        Assert.Equal("<stdin>", JsonDocument.Parse(r.Out).RootElement.GetProperty("file").GetString());
     }
 
     [Fact]
