@@ -35,7 +35,27 @@ public static class SlotSpectrum
     {
         int length = BaseBandLength(values.Length);
         if (destination.Length < length) throw new ArgumentException($"Need {length} entries for {values.Length} slots.", nameof(destination));
+        if (values.Length > FftThreshold)
+        {
+            ComputeBaseBandByFft(values, destination[..length]);
+            return;
+        }
         for (int order = 0; order < length; order++) destination[order] = DirectCore(values, order);
+    }
+
+    /// <summary>Above this slot count the base band comes from one FFT (O(Q log Q)) instead of Q/2 direct sums (O(Q²)).</summary>
+    public const int FftThreshold = 96;
+
+    // S(ν) = e^(−jνΔ/2) · DFT_ν(c) with Δ = 2π/Q; MathNet's Matlab convention is the unscaled
+    // forward transform with the negative exponent, X_ν = Σ c_s e^(−j2πνs/Q).
+    private static void ComputeBaseBandByFft(ReadOnlySpan<double> values, Span<Complex> destination)
+    {
+        int q = values.Length;
+        var buffer = new Complex[q];
+        for (int s = 0; s < q; s++) buffer[s] = values[s];
+        MathNet.Numerics.IntegralTransforms.Fourier.Forward(buffer, MathNet.Numerics.IntegralTransforms.FourierOptions.Matlab);
+        for (int order = 0; order < destination.Length; order++)
+            destination[order] = buffer[order] * Complex.FromPolarCoordinates(1, -Math.PI * order / q);
     }
 
     /// <summary>S(ν) for any order (negative orders give the conjugate) from a base band of a Q-slot distribution.</summary>
