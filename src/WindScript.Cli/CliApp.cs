@@ -16,6 +16,8 @@ public static class CliApp
                 EvalCommand.Create(io),
                 FmtCommand.Create(io),
                 ExplainCommand.Create(io),
+                SynthCommand.Create(io),
+                SweepCommand.Create(io),
                 LspCommand.Create(io),
             };
             var parse = root.Parse(args);

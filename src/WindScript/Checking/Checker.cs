@@ -17,8 +17,8 @@ public static class Checker
         var c = new CheckContext(design, syntax);
         GeometryChecks.Run(c);
         TurnCountChecks.Run(c);
-        FeasibilityCheck.Run(c);
-        bool sound = !sourceHasErrors && c.EveryPhaseWound && Clean(c, LayoutChecks.Run);
+        bool sound = Clean(c, FeasibilityCheck.Run);
+        sound = sound && !sourceHasErrors && c.EveryPhaseWound && Clean(c, LayoutChecks.Run);
         // A reversed coil is the usual root cause of an unbalanced phase: name it, not the imbalance.
         sound = sound && Quiet(c, OpposingCoilCheck.Run);
         sound = sound && Clean(c, PhaseBalanceChecks.Run) && Clean(c, ParallelPathChecks.Run);

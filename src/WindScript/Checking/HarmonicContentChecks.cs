@@ -38,6 +38,6 @@ internal static class HarmonicContentChecks
 
         if (c.Symmetry.AdjacentOrders)
             c.Diagnostics.Add(DiagnosticCatalog.UnbalancedMagneticPull, at,
-                $"the layout repeats only once around the bore (t = gcd(Q, p) = {d.Periodicity}), so adjacent orders such as {p} and {p + 1} coexist and pull the rotor sideways");
+                $"the layout repeats only once around the bore, not reversed (winding periodicity 1; machine periodicity t = gcd(Q, p) = {d.Periodicity}), so adjacent orders such as {p} and {p + 1} coexist and pull the rotor sideways");
     }
 }

@@ -42,10 +42,6 @@ public static partial class DiagnosticCatalog
         "WS3010", Severity.Error, "Phase axes are not evenly spaced",
         "The magnetic axes of the phases (where each phase's fundamental turns function peaks) must lie the phase shift apart — 360/m electrical degrees unless the machine says otherwise — for balanced currents to produce a pure forward-rotating field (Fitzgerald, Kingsley, Umans, Electric Machinery: rotating MMF of a polyphase winding).");
 
-    public static readonly DiagnosticDescriptor InfeasibleCombination = new(
-        "WS3011", Severity.Error, "No balanced winding exists for these slots, poles and phases",
-        "By the star of slots (N. Bianchi, M. Dai Pre, IEE Proc. Electr. Power Appl., 2006), a balanced m-phase double-layer winding exists only if Q/(m·t) is a whole number, t = gcd(Q, p); a single-layer one needs Q even and Q/(2·m·t*) whole, t* = gcd(Q/2, p). The message names the failed condition and the nearest slot and pole counts that satisfy it.");
-
     public static readonly DiagnosticDescriptor SubHarmonics = new(
         "WS3012", Severity.Info, "Sub-harmonic MMF waves",
         "The air-gap MMF contains waves with fewer pole pairs than the working wave (mechanical order below p). This is a property of many fractional-slot windings (e.g. 12 slots, 10 poles), legal but noteworthy: sub-harmonics travel at high speed relative to the rotor and induce rotor and magnet eddy-current losses, and add differential leakage (Pyrhonen et al., ch. 2 and 4).");

@@ -21,7 +21,7 @@ public sealed class CliTests : IDisposable
     [Fact]
     public void Check_of_a_clean_file_exits_0_and_prints_nothing()
     {
-        var r = CliRunner.Run("check", Example("mill_fan_lap.wind"), Example("drone_18s16p.wind"));
+        var r = CliRunner.Run("check", Example("mill_fan_lap.wind"), Example("pump_skid_single_layer.wind"));
         Assert.True(r.Exit == 0, r.Err);
         Assert.Equal("", r.Out);
     }

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace WindScript.LanguageServer.Bench;
+namespace WindScript.Benchmarks.LanguageServer;
 
 /// <summary>
 /// A fictional large machine written out coil by coil: about <c>lines</c> lines, with comments,

@@ -1,0 +1,153 @@
+using System.Buffers;
+using System.Buffers.Text;
+using System.Text;
+using System.Text.Json;
+using WindScript.Sweep;
+
+namespace WindScript.Cli.Output;
+
+/// <summary>
+/// One way of writing sweep records as bytes. An instance belongs to one worker thread.
+/// Numbers: winding factors and q with 6 decimals, the leakage with 6 significant digits,
+/// trailing zeros dropped; the same record always gives the same bytes.
+/// </summary>
+public abstract class SweepFormat
+{
+    public static SweepFormat Create(string name, int orders) => name switch
+    {
+        "csv" => new SweepCsv(orders),
+        _ => new SweepJsonLines(),
+    };
+
+    /// <summary>Text written once before the records (the CSV header), or empty.</summary>
+    public abstract string Header { get; }
+
+    public abstract void Write(SweepRecord record, IBufferWriter<byte> output);
+
+    /// <summary>Formats a number into <paramref name="destination"/>: 'F' with 6 decimals or 'G' with 6 digits, trailing zeros removed.</summary>
+    public static int Number(double value, Span<byte> destination, bool significant = false)
+    {
+        if (!double.IsFinite(value)) value = 0;
+        var format = significant ? new StandardFormat('G', 6) : new StandardFormat('F', 6);
+        if (!Utf8Formatter.TryFormat(value, destination, out int length, format)) throw new InvalidOperationException("number buffer too small");
+        int exponent = destination[..length].IndexOf((byte)'E');
+        int mantissaEnd = exponent < 0 ? length : exponent;
+        if (destination[..mantissaEnd].IndexOf((byte)'.') >= 0)
+        {
+            int end = mantissaEnd;
+            while (destination[end - 1] == (byte)'0') end--;
+            if (destination[end - 1] == (byte)'.') end--;
+            if (end < mantissaEnd)
+            {
+                destination[mantissaEnd..length].CopyTo(destination[end..]);
+                length -= mantissaEnd - end;
+            }
+        }
+        if (length == 2 && destination[0] == (byte)'-' && destination[1] == (byte)'0') { destination[0] = (byte)'0'; length = 1; }
+        return length;
+    }
+}
+
+/// <summary>JSON Lines: one object per layout, written with <see cref="Utf8JsonWriter"/> (no reflection, safe under Native AOT).</summary>
+public sealed class SweepJsonLines : SweepFormat
+{
+    private static readonly JsonEncodedText Slots = JsonEncodedText.Encode("slots"), Poles = JsonEncodedText.Encode("poles"),
+        Phases = JsonEncodedText.Encode("phases"), Layers = JsonEncodedText.Encode("layers"), Pitch = JsonEncodedText.Encode("pitch"),
+        Q = JsonEncodedText.Encode("q"), Periodicity = JsonEncodedText.Encode("periodicity"), Cogging = JsonEncodedText.Encode("coggingOrder"),
+        Paths = JsonEncodedText.Encode("maxParallelPaths"), Leakage = JsonEncodedText.Encode("differentialLeakage"),
+        Sub = JsonEncodedText.Encode("subharmonics"), Lowest = JsonEncodedText.Encode("lowestOrder"), Even = JsonEncodedText.Encode("evenHarmonics"),
+        Adjacent = JsonEncodedText.Encode("adjacentOrders"), Factors = JsonEncodedText.Encode("windingFactors");
+
+    private Utf8JsonWriter? _json;
+
+    public override string Header => "";
+
+    public override void Write(SweepRecord r, IBufferWriter<byte> output)
+    {
+        if (_json is null) _json = new Utf8JsonWriter(output);
+        else _json.Reset(output);
+        var j = _json;
+        Span<byte> number = stackalloc byte[64];
+        j.WriteStartObject();
+        j.WriteNumber(Slots, r.Slots);
+        j.WriteNumber(Poles, r.Poles);
+        j.WriteNumber(Phases, r.Phases);
+        j.WriteNumber(Layers, r.Layers);
+        j.WriteNumber(Pitch, r.Pitch);
+        j.WritePropertyName(Q);
+        j.WriteRawValue(number[..Number(r.SlotsPerPolePerPhase, number)], skipInputValidation: true);
+        j.WriteNumber(Periodicity, r.Periodicity);
+        j.WriteNumber(Cogging, r.CoggingOrder);
+        j.WriteNumber(Paths, r.Sections);
+        j.WritePropertyName(Leakage);
+        j.WriteRawValue(number[..Number(r.DifferentialLeakage, number, significant: true)], skipInputValidation: true);
+        j.WriteBoolean(Sub, r.Subharmonics);
+        j.WriteNumber(Lowest, r.LowestOrder);
+        j.WriteBoolean(Even, r.EvenHarmonics);
+        j.WriteBoolean(Adjacent, r.AdjacentOrders);
+        j.WriteStartArray(Factors);
+        foreach (double k in r.WindingFactors) j.WriteRawValue(number[..Number(k, number)], skipInputValidation: true);
+        j.WriteEndArray();
+        j.WriteEndObject();
+        j.Flush();
+        output.Write("\n"u8);
+    }
+}
+
+/// <summary>CSV with a header row; the winding factors are the last columns, kw1..kwN (electrical orders).</summary>
+public sealed class SweepCsv(int orders) : SweepFormat
+{
+    public override string Header { get; } =
+        "slots,poles,phases,layers,pitch,q,periodicity,coggingOrder,maxParallelPaths,differentialLeakage,subharmonics,lowestOrder,evenHarmonics,adjacentOrders,"
+        + string.Join(",", Enumerable.Range(1, orders).Select(n => $"kw{n}")) + "\n";
+
+    public override void Write(SweepRecord r, IBufferWriter<byte> output)
+    {
+        var span = output.GetSpan(256 + 24 * r.WindingFactors.Length);
+        int at = 0;
+        void Int(Span<byte> s, int value)
+        {
+            Utf8Formatter.TryFormat(value, s[at..], out int n);
+            at += n;
+            s[at++] = (byte)',';
+        }
+        void Bool(Span<byte> s, bool value)
+        {
+            (value ? "true,"u8 : "false,"u8).CopyTo(s[at..]);
+            at += value ? 5 : 6;
+        }
+        Int(span, r.Slots);
+        Int(span, r.Poles);
+        Int(span, r.Phases);
+        Int(span, r.Layers);
+        Int(span, r.Pitch);
+        at += Number(r.SlotsPerPolePerPhase, span[at..]);
+        span[at++] = (byte)',';
+        Int(span, r.Periodicity);
+        Int(span, r.CoggingOrder);
+        Int(span, r.Sections);
+        at += Number(r.DifferentialLeakage, span[at..], significant: true);
+        span[at++] = (byte)',';
+        Bool(span, r.Subharmonics);
+        Int(span, r.LowestOrder);
+        Bool(span, r.EvenHarmonics);
+        Bool(span, r.AdjacentOrders);
+        for (int i = 0; i < r.WindingFactors.Length; i++)
+        {
+            at += Number(r.WindingFactors[i], span[at..]);
+            span[at++] = (byte)(i == r.WindingFactors.Length - 1 ? '\n' : ',');
+        }
+        output.Advance(at);
+    }
+}
+
+/// <summary>Turns written bytes into text for a <see cref="TextWriter"/> (the records are ASCII).</summary>
+internal static class Ascii
+{
+    public static void Write(TextWriter writer, ReadOnlySpan<byte> bytes, ref char[] scratch)
+    {
+        if (scratch.Length < bytes.Length) scratch = new char[Math.Max(bytes.Length, scratch.Length * 2)];
+        int n = Encoding.UTF8.GetChars(bytes, scratch);
+        writer.Write(scratch, 0, n);
+    }
+}

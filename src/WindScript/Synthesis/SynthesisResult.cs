@@ -1,0 +1,33 @@
+using System.Collections.Immutable;
+using WindScript.Diagnostics;
+using WindScript.Model;
+
+namespace WindScript.Synthesis;
+
+/// <summary>
+/// The outcome of a synthesis: the winding design (null when none exists), the feasibility
+/// report, and the facts of the layout that a designer reads next to it. When the design is
+/// null, <see cref="Diagnostics"/> says why, with the nearest feasible choices.
+/// </summary>
+public sealed record SynthesisResult
+{
+    public WindingDesign? Design { get; init; }
+
+    public required FeasibilityReport Feasibility { get; init; }
+
+    /// <summary>The coil pitch used (or tried), in slots.</summary>
+    public int Pitch { get; init; }
+
+    /// <summary>Identical sections around the bore; parallel paths must divide it (see <see cref="StarLayout.Sections"/>).</summary>
+    public int Sections { get; init; }
+
+    /// <summary>The slot shift carrying each phase onto the next.</summary>
+    public int PhaseStep { get; init; }
+
+    /// <summary>Single layer: true when every coil runs forward (the slot-pattern form applies).</summary>
+    public bool ForwardCoils { get; init; }
+
+    public ImmutableArray<Diagnostic> Diagnostics { get; init; } = [];
+
+    public bool Succeeded => Design is not null;
+}
