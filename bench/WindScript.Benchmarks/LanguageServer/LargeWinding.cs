@@ -3,7 +3,7 @@ using System.Text;
 namespace WindScript.Benchmarks.LanguageServer;
 
 /// <summary>
-/// A fictional large machine written out coil by coil: about <c>lines</c> lines, with comments,
+/// A fictional large generator (6 m bore, q = 3, 8/9 pitch) written out coil by coil: about <c>lines</c> lines, with comments,
 /// values, explicit coils in groups, and two drives. Clean (no diagnostics) as generated.
 /// </summary>
 public static class LargeWinding
@@ -16,9 +16,9 @@ public static class LargeWinding
         int poles = slots / 9;
         var text = new StringBuilder();
         text.Append("# Benchmark machine: a fictional large generator, written out coil by coil.\n");
-        text.Append("let n = 4  # turns per coil\nlet y = 8  # coil pitch in slots (8/9)\n\n");
+        text.Append("let n = 4  # turns per coil\n\n");
         text.Append("machine big_generator {\n");
-        text.Append($"  slots {slots}\n  poles {poles}\n  phases U V W\n  bore 2400 mm\n  stack 900 mm\n  gap 6 mm\n  slot_opening 14 mm\n}}\n\n");
+        text.Append($"  slots {slots}\n  poles {poles}\n  phases U V W\n  bore 6000 mm\n  stack 1500 mm\n  gap 12 mm\n  slot_opening 4 mm\n}}\n\n");
         text.Append("winding stator {\n  layers 2\n  turns n\n");
         string[] belts = ["U", "-W", "V", "-U", "W", "-V"];
         for (int s = 1; s <= slots; s++)
