@@ -25,7 +25,8 @@ public sealed class LanguageServer
     private readonly TextWriter? _log;
     private readonly DocumentStore _documents = new();
     private readonly HashSet<string> _unpublished = new(StringComparer.Ordinal);
-    private readonly ConcurrentDictionary<string, byte> _cancelled = new(StringComparer.Ordinal);
+    // Requests read but not yet handled, by id, with whether the client has cancelled them since.
+    private readonly ConcurrentDictionary<string, bool> _queued = new(StringComparer.Ordinal);
     private readonly Channel<Incoming> _inbox = Channel.CreateUnbounded<Incoming>(new UnboundedChannelOptions { SingleReader = true, SingleWriter = true });
     private readonly Dictionary<string, Func<JsonObject, JsonNode?>> _requests;
     private readonly Dictionary<string, Action<JsonObject>> _notifications;
@@ -117,9 +118,15 @@ public sealed class LanguageServer
                     _inbox.Writer.TryWrite(new Incoming(null, $"the message is not valid JSON: {e.Message}"));
                     continue;
                 }
-                // Cancellation is noted on arrival, so a request still waiting in the inbox is skipped.
-                if (message is JsonObject o && MethodOf(o) == "$/cancelRequest" && o["params"]?["id"] is JsonValue id)
-                    _cancelled[IdKey(id)] = 0;
+                // Cancellation is noted on arrival, so a request still waiting in the inbox is skipped;
+                // cancelling one already answered (editors do that often) leaves nothing behind.
+                if (message is JsonObject o)
+                {
+                    if (MethodOf(o) == "$/cancelRequest" && o["params"]?["id"] is JsonValue cancelled)
+                        _queued.TryUpdate(IdKey(cancelled), true, false);
+                    else if (o["id"] is JsonValue id && MethodOf(o) is not null)
+                        _queued[IdKey(id)] = false;
+                }
                 _inbox.Writer.TryWrite(new Incoming(message, null));
             }
         }
@@ -180,6 +187,7 @@ public sealed class LanguageServer
         }
         if (isRequest && !IsValidId(id))
         {
+            if (id is not null) _queued.TryRemove(IdKey(id), out _);
             TrySend(() => _writer.RespondError(null, RpcErrorCodes.InvalidRequest, "a request id must be a string or a number"));
             return null;
         }
@@ -189,7 +197,7 @@ public sealed class LanguageServer
 
     private int? HandleRequest(JsonNode id, string method, JsonObject parameters)
     {
-        if (_cancelled.TryRemove(IdKey(id), out _))
+        if (_queued.TryRemove(IdKey(id), out bool cancelled) && cancelled)
         {
             TrySend(() => _writer.RespondError(id, RpcErrorCodes.RequestCancelled, "the request was cancelled"));
             return null;

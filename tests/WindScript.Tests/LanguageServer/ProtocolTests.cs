@@ -188,5 +188,18 @@ public class ProtocolTests
         Assert.Null((await client.RequestAsync("shutdown", null))["error"]);
     }
 
+    [Fact]
+    public async Task Cancelling_an_answered_request_leaves_nothing_behind()
+    {
+        await using var client = await LspTestClient.StartAsync();
+        client.Open(Samples.Uri, Samples.FanMotor);
+        var first = await client.RequestWithIdAsync(42, "textDocument/documentSymbol", LspTestClient.Doc(Samples.Uri));
+        Assert.Null(first["error"]);
+        client.Notify("$/cancelRequest", new JsonObject { ["id"] = 42 }); // too late: already answered
+        // A later request with the same id is answered normally, not taken as cancelled.
+        var again = await client.RequestWithIdAsync(42, "textDocument/documentSymbol", LspTestClient.Doc(Samples.Uri));
+        Assert.Null(again["error"]);
+    }
+
     private static string Frame(string body) => $"Content-Length: {System.Text.Encoding.UTF8.GetByteCount(body)}\r\n\r\n{body}";
 }
