@@ -31,7 +31,7 @@ public static class ServerCapabilities
             ["renameProvider"] = new JsonObject { ["prepareProvider"] = true },
             ["completionProvider"] = new JsonObject
             {
-                ["triggerCharacters"] = new JsonArray(":", "-"),
+                ["triggerCharacters"] = new JsonArray(":"), // after "top:" come the phases
                 ["resolveProvider"] = false,
             },
             ["codeActionProvider"] = new JsonObject { ["codeActionKinds"] = new JsonArray("quickfix") },
