@@ -79,6 +79,39 @@ public class HoverTests : IAsyncLifetime
         Assert.Contains("differential leakage", text);
     }
 
+    /// <summary>
+    /// Fractional-slot concentrated winding, 12 slots and 10 poles, double layer: fundamental
+    /// winding factor 0.933 (F. Magnussen, C. Sadarangani, 2003; J. Cros, P. Viarouge, 2002).
+    /// The tooth-coil layout is the standard one for this slot/pole pair (common practice).
+    /// </summary>
+    [Fact]
+    public async Task A_twelve_slot_ten_pole_tooth_coil_winding_shows_kw1_0_933()
+    {
+        const string text = """
+            machine hub {
+              slots 12
+              poles 10
+              phases U V W
+            }
+
+            winding teeth {
+              layers 2
+              turns 20
+              pitch 1 slots
+              top: U -U -V V W -W -U U V -V -W W
+            }
+
+            """;
+        await using var client = await LspTestClient.StartAsync();
+        client.Open(Samples.Uri, text);
+        await client.DiagnosticsAsync(Samples.Uri);
+        var (line, col) = Samples.Find(text, "winding teeth");
+        var hover = await client.ResultAsync("textDocument/hover", LspTestClient.At(Samples.Uri, line, col + 9));
+        var value = (string)hover!["contents"]!["value"]!;
+        Assert.Contains("kw1 = 0.933", value);
+        Assert.Contains("coil pitch 1 slot (pole pitch 6/5 slots)", value);
+    }
+
     [Fact]
     public async Task The_machine_shows_slots_per_pole_and_phase_and_periodicity()
     {
