@@ -18,6 +18,7 @@ public static class CliApp
                 ExplainCommand.Create(io),
                 SynthCommand.Create(io),
                 SweepCommand.Create(io),
+                DiffCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)
