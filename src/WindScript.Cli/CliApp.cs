@@ -19,6 +19,7 @@ public static class CliApp
                 SynthCommand.Create(io),
                 SweepCommand.Create(io),
                 DiffCommand.Create(io),
+                ShowCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)

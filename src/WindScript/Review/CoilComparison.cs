@@ -27,6 +27,11 @@ public static class CoilComparison
         return [.. changes.OrderBy(c => c.GoSlot).ThenBy(c => c.ReturnSlot).ThenBy(c => c.Added)];
     }
 
+    /// <summary>Every coil of a design as a connection (go side first for positive polarity), sorted by slot.</summary>
+    public static ImmutableArray<CoilChange> Connections(WindingDesign design) =>
+        [.. Count(design).SelectMany(x => Enumerable.Repeat(Describe(x.Key, true, design), x.Value))
+            .OrderBy(c => c.GoSlot).ThenBy(c => c.ReturnSlot).ThenBy(c => c.Phase, StringComparer.Ordinal)];
+
     private static Dictionary<Connection, int> Count(WindingDesign design)
     {
         var counts = new Dictionary<Connection, int>();

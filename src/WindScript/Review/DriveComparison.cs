@@ -22,34 +22,41 @@ public static class DriveComparison
             var other = after.FirstOrDefault(d => d.Name == drive.Name);
             if (other is null)
             {
-                changes.Add(new DriveChange(drive.Name, DriveChangeKind.Removed, [.. Describe(drive, a!).Select(x => new TextRow(x.Key, x.Value, null))]));
+                changes.Add(new DriveChange(drive.Name, DriveChangeKind.Removed, [.. Describe(drive, a!).Select(x => new TextRow(Label(x.Key, a!), x.Value, null))]));
                 continue;
             }
             var x = Describe(drive, a!);
             var y = Describe(other, b!);
-            var rows = x.Keys.Concat(y.Keys).Distinct()
-                .Select(key => new TextRow(key, x.GetValueOrDefault(key), y.GetValueOrDefault(key)))
+            var rows = x.Keys.Concat(y.Keys).Distinct().Order()
+                .Select(key => new TextRow(Label(key, b!), x.GetValueOrDefault(key), y.GetValueOrDefault(key)))
                 .Where(r => r.Changed)
                 .ToImmutableArray();
             if (!rows.IsEmpty) changes.Add(new DriveChange(drive.Name, DriveChangeKind.Changed, rows));
         }
         foreach (var drive in after.Where(d => before.All(x => x.Name != d.Name)))
-            changes.Add(new DriveChange(drive.Name, DriveChangeKind.Added, [.. Describe(drive, b!).Select(x => new TextRow(x.Key, null, x.Value))]));
+            changes.Add(new DriveChange(drive.Name, DriveChangeKind.Added, [.. Describe(drive, b!).Select(x => new TextRow(Label(x.Key, b!), null, x.Value))]));
         return changes.ToImmutable();
     }
 
-    /// <summary>One line per phase current, plus the neutral; keyed by phase position so renamed phases still match.</summary>
-    public static IReadOnlyDictionary<string, string> Describe(Drive drive, WindingDesign design)
+    /// <summary>Key for the neutral line in <see cref="Describe"/>; other keys are phase indices.</summary>
+    public const int Neutral = int.MaxValue;
+
+    /// <summary>
+    /// One line per phase current (keyed by phase index, so renamed phases still match) and one
+    /// for the neutral (key <see cref="Neutral"/>), in key order.
+    /// </summary>
+    public static SortedDictionary<int, string> Describe(Drive drive, WindingDesign design)
     {
-        var lines = new Dictionary<string, string>();
+        var lines = new SortedDictionary<int, string>();
         foreach (var current in drive.Currents)
-        {
-            string name = current.Phase < design.Phases.Length ? design.Phases[current.Phase].Name : $"#{current.Phase + 1}";
-            lines[$"phase {current.Phase + 1} ({name})"] = current.Components.IsEmpty ? "no current" : string.Join(" + ", current.Components.Select(Component));
-        }
-        lines["neutral"] = drive.Neutral ? "connected" : "not connected";
+            lines[current.Phase] = current.Components.IsEmpty ? "no current" : string.Join(" + ", current.Components.Select(Component));
+        lines[Neutral] = drive.Neutral ? "connected" : "not connected";
         return lines;
     }
+
+    /// <summary>"phase 1 (U)" or "neutral".</summary>
+    public static string Label(int key, WindingDesign design) =>
+        key == Neutral ? "neutral" : $"phase {key + 1} ({(key < design.Phases.Length ? design.Phases[key].Name : "?")})";
 
     private static string Component(CurrentComponent c)
     {
