@@ -20,6 +20,7 @@ public static class CliApp
                 SweepCommand.Create(io),
                 DiffCommand.Create(io),
                 ShowCommand.Create(io),
+                PlotCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)
