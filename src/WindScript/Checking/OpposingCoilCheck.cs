@@ -11,6 +11,9 @@ internal static class OpposingCoilCheck
     {
         var d = c.Design;
         int p = d.PolePairs;
+        // e^(−jpθ) of every slot centre, once: a coil's phasor is then two look-ups.
+        var unit = new Complex[d.Slots];
+        for (int s = 0; s < d.Slots; s++) unit[s] = Complex.FromPolarCoordinates(1, -p * SlotSpectrum.SlotAngle(s, d.Slots));
         for (int k = 0; k < c.PhaseCount; k++)
         {
             var total = SlotSpectrum.Direct(c.Spectrum.SlotConductors[k], p);
@@ -18,7 +21,7 @@ internal static class OpposingCoilCheck
             foreach (var coil in d.Winding.Coils)
             {
                 if (coil.Phase != k) continue;
-                var phasor = CoilPhasor(coil, d.Slots, p);
+                var phasor = coil.Turns * coil.Polarity * (unit[coil.GoSlot - 1] - unit[coil.ReturnSlot - 1]);
                 // Only coils that link the fundamental at all have a direction to judge.
                 if (phasor.Magnitude < 1e-6 * coil.Turns) continue;
                 double cos = (phasor * Complex.Conjugate(total)).Real / (phasor.Magnitude * total.Magnitude);
@@ -29,13 +32,5 @@ internal static class OpposingCoilCheck
                 c.Diagnostics.Add(diagnostic);
             }
         }
-    }
-
-    /// <summary>The coil's slot spectrum at order ν: its go side minus its return side.</summary>
-    private static Complex CoilPhasor(Model.Coil coil, int slots, int order)
-    {
-        double go = order * SlotSpectrum.SlotAngle(coil.GoSlot - 1, slots);
-        double back = order * SlotSpectrum.SlotAngle(coil.ReturnSlot - 1, slots);
-        return coil.Turns * coil.Polarity * (Complex.FromPolarCoordinates(1, -go) - Complex.FromPolarCoordinates(1, -back));
     }
 }

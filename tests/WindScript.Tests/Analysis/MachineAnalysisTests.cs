@@ -88,3 +88,23 @@ public class MachineAnalysisTests
         Assert.Equal(50, r.Drives[0].BackEmfFrequencyHz ?? 50);
     }
 }
+
+public class DegenerateDesignTests
+{
+    // Whatever the checker reports, evaluation must not throw and must give finite figures.
+    [Theory]
+    [InlineData(1, 2, 1)]
+    [InlineData(6, 0, 3)]
+    [InlineData(2, 2, 2)]
+    [InlineData(12, 2, 0)]
+    public void Odd_designs_evaluate_to_finite_figures(int slots, int poles, int phases)
+    {
+        var coils = phases == 0 ? [] : new[] { new WindScript.Model.Coil(0, 1, slots, 0, 1, 3, 1) };
+        var d = Designs.Create(slots, poles, phases, coils, geometry: new WindScript.Model.Geometry { BoreDiameter = 0.1, StackLength = 0.1, Gap = 0.001 },
+            drives: phases == 0 ? default : [Designs.Balanced(phases, 1, 50, 120)]);
+        var r = MachineAnalysis.Evaluate(d);
+        Assert.All(r.Phases.SelectMany(p => p.Harmonics), h => Assert.True(double.IsFinite(h.WindingFactor) && double.IsFinite(h.ElectricalOrder)));
+        Assert.All(r.Drives.SelectMany(x => x.Harmonics), w => Assert.True(double.IsFinite(w.Forward) && double.IsFinite(w.ElectricalOrder)));
+        Assert.True(r.DifferentialLeakage is null || double.IsFinite(r.DifferentialLeakage.Value));
+    }
+}

@@ -1,4 +1,5 @@
 using System.Text;
+using WindScript.Analysis;
 using WindScript.Cli.Output;
 using WindScript.Diagnostics;
 using WindScript.Formatting;
@@ -9,7 +10,7 @@ namespace WindScript.Tests.Baselines;
 /// <summary>
 /// Snapshot tests: for every file in examples/ and tests/cases/, the diagnostics (each printed
 /// under the line that caused it), the formatted text and the evaluated summary are compared
-/// with tests/baselines/&lt;folder&gt;/&lt;name&gt;.txt. Regenerate after an intended change with
+/// with tests/baselines/&lt;folder&gt;/&lt;name&gt;.txt (the eval part includes the MMF/field analysis to electrical order 13). Regenerate after an intended change with
 /// tests/update-baselines.sh (WINDSCRIPT_UPDATE_BASELINES=1) and review the diff.
 /// </summary>
 public class BaselineTests
@@ -52,6 +53,7 @@ public class BaselineTests
         {
             using var writer = new StringWriter();
             EvalText.WriteSummary(writer, design);
+            EvalAnalysisText.Write(writer, MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = 13 }));
             sb.Append(writer.ToString().Replace("\r\n", "\n"));
         }
         else
