@@ -21,6 +21,7 @@ public static class CliApp
                 DiffCommand.Create(io),
                 ShowCommand.Create(io),
                 PlotCommand.Create(io),
+                ReportCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)

@@ -142,19 +142,11 @@ public static class DiffText
         table.Write(o);
     }
 
-    /// <summary>Up to 5 significant digits, no exponent for ordinary machine figures.</summary>
-    public static string Number(double? x)
-    {
-        if (x is not { } v) return "n/a";
-        if (v == 0) return "0";
-        double magnitude = Math.Abs(v);
-        int decimals = Math.Clamp(4 - (int)Math.Floor(Math.Log10(magnitude)), 0, 9);
-        return Math.Round(v, decimals).ToString("0." + new string('#', Math.Max(1, decimals)), Inv);
-    }
+    public static string Number(double? x) => FigureFormat.Number(x);
 
     private static string Signed(double x) => (x > 0 ? "+" : "") + Number(x);
 
-    private static string Factor(double? x) => x is { } v ? v.ToString("0.0000", Inv) : "n/a";
+    private static string Factor(double? x) => FigureFormat.Factor(x);
 
     private static string Percent(double? x) => x is { } v ? (v * 100).ToString("0.00", Inv) : "n/a";
 

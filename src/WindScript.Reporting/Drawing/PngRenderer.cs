@@ -30,8 +30,14 @@ public static class PngRenderer
             case PathShape p when p.Points.Count > 0:
                 using (var path = new SKPath())
                 {
-                    path.MoveTo((float)p.Points[0].X, (float)p.Points[0].Y);
-                    for (int i = 1; i < p.Points.Count; i++) path.LineTo((float)p.Points[i].X, (float)p.Points[i].Y);
+                    bool move = true;
+                    foreach (var point in p.Points)
+                    {
+                        if (double.IsNaN(point.X)) { move = true; continue; }
+                        if (move) path.MoveTo((float)point.X, (float)point.Y);
+                        else path.LineTo((float)point.X, (float)point.Y);
+                        move = false;
+                    }
                     if (p.Closed) path.Close();
                     if (p.Fill is { } fill) canvas.DrawPath(path, FillPaint(fill, p.Opacity));
                     if (p.Stroke is { } stroke) canvas.DrawPath(path, StrokePaint(stroke));

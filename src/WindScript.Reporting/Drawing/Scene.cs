@@ -15,8 +15,14 @@ public abstract record Shape
     public string? Id { get; init; }
 }
 
-/// <summary>An open polyline or a closed polygon, stroked and/or filled.</summary>
-public sealed record PathShape(IReadOnlyList<Point> Points, bool Closed, Stroke? Stroke, string? Fill = null, double Opacity = 1) : Shape;
+/// <summary>
+/// An open polyline or a closed polygon, stroked and/or filled. A point with NaN coordinates
+/// (<see cref="PathShape.Break"/>) lifts the pen: the next point starts a new piece.
+/// </summary>
+public sealed record PathShape(IReadOnlyList<Point> Points, bool Closed, Stroke? Stroke, string? Fill = null, double Opacity = 1) : Shape
+{
+    public static readonly Point Break = new(double.NaN, double.NaN);
+}
 
 public sealed record CircleShape(Point Centre, double Radius, Stroke? Stroke, string? Fill = null) : Shape;
 

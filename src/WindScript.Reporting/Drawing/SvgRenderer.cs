@@ -57,7 +57,13 @@ public static class SvgRenderer
     public static string PathData(IReadOnlyList<Point> points, bool closed)
     {
         var d = new StringBuilder();
-        for (int i = 0; i < points.Count; i++) d.Append(i == 0 ? "M" : "L").Append(N(points[i].X)).Append(' ').Append(N(points[i].Y));
+        bool move = true;
+        foreach (var p in points)
+        {
+            if (double.IsNaN(p.X)) { move = true; continue; }
+            d.Append(move ? "M" : "L").Append(N(p.X)).Append(' ').Append(N(p.Y));
+            move = false;
+        }
         if (closed) d.Append('Z');
         return d.ToString();
     }

@@ -91,10 +91,10 @@ public static class FieldPlot
         area.DrawLegend(s, [("staircase", Palette.Staircase, false, null), ("fundamental", Palette.Fundamental, false, [7, 4])]);
 
         // Colour key.
-        double kx = 560, ky = 450;
+        double kx = 560, ky = 466;
         for (int k = 0; k < 40; k++) s.Rect(kx + k * 6, ky, 6.5, 12, Palette.Diverging(-1 + 2 * k / 39.0));
-        s.Text(kx, ky + 26, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
-        s.Text(kx + 240, ky + 26, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx, ky + 24, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 240, ky + 24, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? "gap: radial B (T); slots: current (relative)" : "gap: MMF; slots: current (relative)", 10, Palette.Muted, Anchor.Middle);
         return s;
     }
