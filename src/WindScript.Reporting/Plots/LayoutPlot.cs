@@ -52,13 +52,14 @@ public static class LayoutPlot
             int span = coil.PitchSlots(q);
             return span > q / 2.0 ? span - q : span;   // the shorter way round
         }
-        int widest = d.Winding.Coils.Select(c => Math.Abs(Span(c, q))).DefaultIfEmpty(1).Max();
+        int widest = Math.Max(1, d.Winding.Coils.Select(c => Math.Abs(Span(c, q))).DefaultIfEmpty(1).Max());
+        double rise = Math.Min((arcBand - 16) / widest, 0.5 * cell);   // pixels of height per slot of span
         foreach (var coil in d.Winding.Coils)
         {
             int span = Span(coil, q);
             if (span == 0) continue;
             // Arc height grows with the span, so concentric coils nest visibly.
-            double x0 = left + (coil.GoSlot - 0.5) * cell, height = 12 + (arcBand - 24) * Math.Abs(span) / Math.Max(1, widest);
+            double x0 = left + (coil.GoSlot - 0.5) * cell, height = 10 + rise * Math.Abs(span);
             var color = coil.Phase < d.Phases.Length ? Palette.Phase(coil.Phase) : Palette.Muted;
             var points = Enumerable.Range(0, 25).Select(i =>
             {
