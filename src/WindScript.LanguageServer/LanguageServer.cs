@@ -81,7 +81,7 @@ public sealed class LanguageServer
             server._requests[method] = handler;
         _ = Task.Run(() => server.ReadAllAsync(input, cancel), CancellationToken.None);
         // The parser recurses per nested bracket and a stack overflow would end the process:
-        // handle messages on a thread with a generous stack (see NestingGuard for the bound).
+        // handle messages on a thread with a generous stack (the core bounds nesting: SyntaxTree.MaxNesting).
         var exit = new TaskCompletionSource<int>(TaskCreationOptions.RunContinuationsAsynchronously);
         var thread = new Thread(() =>
         {

@@ -39,7 +39,8 @@ public sealed class Compilation
     public static Compilation Compile(SourceText source)
     {
         var syntax = SyntaxTree.Parse(source);
-        var semantics = Evaluator.Evaluate(syntax);
+        // A refused file has nothing to evaluate: its one diagnostic says why.
+        var semantics = syntax.TooDeep ? new Evaluator.Result(null, new SemanticModel(), []) : Evaluator.Evaluate(syntax);
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)

@@ -36,13 +36,8 @@ public sealed class Document(string uri, int version, string text)
     /// <summary>Hover shows the main harmonics, so orders up to the 25th electrical are plenty.</summary>
     private static readonly AnalysisOptions HoverAnalysis = new() { MaxElectricalOrder = 25 };
 
-    private Compilation Compile()
-    {
-        if (NestingGuard.TooDeep(Text))
-            throw new RpcException(RpcErrorCodes.RequestFailed,
-                $"this file nests brackets more than {NestingGuard.MaxDepth:N0} levels deep; it is not checked");
-        return WindScript.Compilation.Compile(Text, Uri);
-    }
+    // The core refuses absurdly deep nesting with a diagnostic (SyntaxTree.MaxNesting), so any text is safe to compile.
+    private Compilation Compile() => WindScript.Compilation.Compile(Text, Uri);
 
     public void Update(int version, string text)
     {

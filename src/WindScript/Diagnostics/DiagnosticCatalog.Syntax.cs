@@ -18,4 +18,13 @@ public static partial class DiagnosticCatalog
         ended before its closing '}'. Everything after the opening brace was read as part of the
         block. Add the missing '}' where the block should end.
         """);
+
+    public static readonly DiagnosticDescriptor NestingTooDeep = new(
+        "WS1003", Severity.Error, "Brackets nested too deeply",
+        """
+        The file nests parentheses or braces more deeply than any winding description needs
+        (the limit is in the message). Reading it would need unbounded recursion, so the file is
+        not read at all; the marked bracket is the first one past the limit. Flatten the
+        expression or the blocks.
+        """);
 }

@@ -25,11 +25,38 @@ public sealed class SyntaxTree
 
     public static SyntaxTree Parse(string text, string path = "") => Parse(new SourceText(text, path));
 
+    /// <summary>
+    /// Deepest bracket nesting read. The parser recurses once per level, and a stack overflow
+    /// cannot be caught in .NET, so a deeper file is refused with one diagnostic instead.
+    /// Real winding files nest a handful of levels.
+    /// </summary>
+    public const int MaxNesting = 100;
+
+    /// <summary>True when the file was refused for nesting deeper than <see cref="MaxNesting"/>.</summary>
+    public bool TooDeep { get; private init; }
+
     public static SyntaxTree Parse(SourceText source)
     {
         var (tokens, comments) = Lexer.Lex(source.Text);
+        if (FirstTooDeep(tokens) is { } bracket)
+        {
+            var span = new TextSpan(0, source.Length);
+            var diagnostic = DiagnosticCatalog.NestingTooDeep.At(bracket.Span, $"brackets are nested more than {MaxNesting} levels deep here; the file is not read");
+            return new SyntaxTree(source, tokens, comments, new CompilationUnitSyntax([], span), [diagnostic]) { TooDeep = true };
+        }
         var root = Parser.ParseTokens(tokens);
         var diagnostics = SyntaxDiagnostics.Collect(root);
         return new SyntaxTree(source, tokens, comments, root, diagnostics);
+    }
+
+    private static Token? FirstTooDeep(Token[] tokens)
+    {
+        int depth = 0;
+        foreach (var t in tokens)
+        {
+            if (t.Kind is TokenKind.LParen or TokenKind.LBrace && ++depth > MaxNesting) return t;
+            if (t.Kind is TokenKind.RParen or TokenKind.RBrace) depth = Math.Max(0, depth - 1);
+        }
+        return null;
     }
 }
