@@ -12,7 +12,17 @@ public static class Lexer
 {
     public static (Token[] Tokens, Comment[] Comments) Lex(string text)
     {
-        var tokens = new List<Token>(text.Length / 3 + 4);
+        var tokens = new List<Token>(text.Length / 4 + 4);
+        // Files repeat the same few words ("coil", "U", "turns") thousands of times: share one string each.
+        var pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
+        string Text(int start, int end)
+        {
+            var span = text.AsSpan(start, end - start);
+            if (pool.TryGetValue(span, out var known)) return known;
+            var created = span.ToString();
+            pool[created] = created;
+            return created;
+        }
         var comments = new List<Comment>();
         int i = 0;
         bool lineHasCode = false;
@@ -42,7 +52,7 @@ public static class Lexer
             {
                 int start = i;
                 i = ScanNumber(text, i);
-                tokens.Add(new Token(TokenKind.Number, text[start..i], TextSpan.FromBounds(start, i)));
+                tokens.Add(new Token(TokenKind.Number, Text(start, i), TextSpan.FromBounds(start, i)));
                 int unitStart = i;
                 while (unitStart < text.Length && (text[unitStart] == ' ' || text[unitStart] == '\t')) unitStart++;
                 if (MatchUnit(text, unitStart) is { } unit)
@@ -56,11 +66,11 @@ public static class Lexer
             {
                 int start = i;
                 while (i < text.Length && IsWordPart(text[i])) i++;
-                tokens.Add(new Token(TokenKind.Word, text[start..i], TextSpan.FromBounds(start, i)));
+                tokens.Add(new Token(TokenKind.Word, Text(start, i), TextSpan.FromBounds(start, i)));
                 continue;
             }
             var (kind, length) = Punctuation(text, i);
-            tokens.Add(new Token(kind, text.Substring(i, length), new TextSpan(i, length)));
+            tokens.Add(new Token(kind, Text(i, i + length), new TextSpan(i, length)));
             i += length;
         }
         tokens.Add(new Token(TokenKind.End, "", new TextSpan(text.Length, 0)));
@@ -95,6 +105,7 @@ public static class Lexer
 
     private static string? MatchUnit(string text, int at)
     {
+        if (at >= text.Length || !char.IsAsciiLetter(text[at])) return null; // every unit starts with a letter
         foreach (var symbol in UnitTable.SymbolsLongestFirst)
         {
             if (string.CompareOrdinal(text, at, symbol, 0, symbol.Length) != 0) continue;
