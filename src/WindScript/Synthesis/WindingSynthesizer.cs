@@ -133,7 +133,8 @@ public static class WindingSynthesizer
             ? $"stepping by {pitch} slots visits {slots / WindingDesign.Gcd(slots, pitch)} slots before it returns, an odd number, so go and return sides cannot alternate"
             : $"the go sides that pitch selects do not form a balanced star";
         string list = works.Count == 0 ? "no pitch works" : "pitches that work: " + string.Join(", ", works.Take(12)) + (works.Count > 12 ? ", ..." : "");
-        return DiagnosticCatalog.PitchNotBalanced.At(default, $"no balanced single-layer winding with a coil pitch of {pitch} slots: {reason}; {list}");
+        string what = layers == 1 ? "single-layer winding" : "winding";
+        return DiagnosticCatalog.PitchNotBalanced.At(default, $"no balanced {what} with a coil pitch of {pitch} slots: {reason}; {list}");
     }
 
     private static string PoleText(int slots, int poles)
