@@ -28,6 +28,7 @@ public abstract class SweepFormat
     public static int Number(double value, Span<byte> destination, bool significant = false)
     {
         if (!double.IsFinite(value)) value = 0;
+        if (!significant && Math.Abs(value) < 1e12) return FixedSix(value, destination);
         var format = significant ? new StandardFormat('G', 6) : new StandardFormat('F', 6);
         if (!Utf8Formatter.TryFormat(value, destination, out int length, format)) throw new InvalidOperationException("number buffer too small");
         int exponent = destination[..length].IndexOf((byte)'E');
@@ -45,6 +46,29 @@ public abstract class SweepFormat
         }
         if (length == 2 && destination[0] == (byte)'-' && destination[1] == (byte)'0') { destination[0] = (byte)'0'; length = 1; }
         return length;
+    }
+
+    // 'F6' without the general formatter: the value rounded to millionths as an integer, then its
+    // digits (about ten times faster; the sweep writes tens of thousands of these).
+    private static int FixedSix(double value, Span<byte> destination)
+    {
+        long micro = (long)Math.Round(Math.Abs(value) * 1e6, MidpointRounding.AwayFromZero);
+        int at = 0;
+        if (micro == 0) { destination[0] = (byte)'0'; return 1; }
+        if (value < 0) destination[at++] = (byte)'-';
+        long whole = micro / 1_000_000, fraction = micro % 1_000_000;
+        Utf8Formatter.TryFormat(whole, destination[at..], out int n);
+        at += n;
+        if (fraction == 0) return at;
+        destination[at++] = (byte)'.';
+        int digits = 6;
+        while (fraction % 10 == 0) { fraction /= 10; digits--; }
+        for (int i = digits - 1; i >= 0; i--)
+        {
+            destination[at + i] = (byte)('0' + fraction % 10);
+            fraction /= 10;
+        }
+        return at + digits;
     }
 }
 
