@@ -165,13 +165,43 @@ public sealed class SweepCsv(int orders) : SweepFormat
     }
 }
 
-/// <summary>Turns written bytes into text for a <see cref="TextWriter"/> (the records are ASCII).</summary>
-internal static class Ascii
+/// <summary>
+/// Where sweep output goes: straight to the standard output bytes when there is such a stream,
+/// else through the text writer (tests). The records are ASCII, so both give the same text.
+/// </summary>
+internal sealed class RecordOutput
 {
-    public static void Write(TextWriter writer, ReadOnlySpan<byte> bytes, ref char[] scratch)
+    private readonly CliIO _io;
+    private char[] _scratch = [];
+
+    public RecordOutput(CliIO io)
     {
-        if (scratch.Length < bytes.Length) scratch = new char[Math.Max(bytes.Length, scratch.Length * 2)];
-        int n = Encoding.UTF8.GetChars(bytes, scratch);
-        writer.Write(scratch, 0, n);
+        _io = io;
+        if (io.RawOut is not null) io.Out.Flush();   // anything written as text so far goes first
+    }
+
+    public void Write(string text)
+    {
+        if (text.Length == 0) return;
+        if (_io.RawOut is { } raw) raw.Write(Encoding.UTF8.GetBytes(text));
+        else _io.Out.Write(text);
+    }
+
+    public void Write(ReadOnlySpan<byte> bytes)
+    {
+        if (_io.RawOut is { } raw)
+        {
+            raw.Write(bytes);
+            return;
+        }
+        if (_scratch.Length < bytes.Length) _scratch = new char[Math.Max(bytes.Length, 2 * _scratch.Length)];
+        int n = Encoding.UTF8.GetChars(bytes, _scratch);
+        _io.Out.Write(_scratch, 0, n);
+    }
+
+    public void Flush()
+    {
+        if (_io.RawOut is { } raw) raw.Flush();
+        else _io.Out.Flush();
     }
 }
