@@ -15,6 +15,7 @@ public static class CliApp
                 CheckCommand.Create(io),
                 EvalCommand.Create(io),
                 FmtCommand.Create(io),
+                ExplainCommand.Create(io),
                 SynthCommand.Create(io),
                 SweepCommand.Create(io),
             };

@@ -42,6 +42,8 @@ public sealed class Compilation
         var semantics = Evaluator.Evaluate(syntax);
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
+        if (semantics.Design is { } design)
+            all.AddRange(Checking.Checker.Check(design, syntax, sourceHasErrors: all.Any(d => d.Severity == Severity.Error)));
         all.Sort((a, b) => a.Span.Start != b.Span.Start ? a.Span.Start.CompareTo(b.Span.Start) : string.CompareOrdinal(a.Code, b.Code));
         return new Compilation(syntax, semantics, all);
     }

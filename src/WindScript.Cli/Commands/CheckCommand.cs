@@ -10,7 +10,7 @@ public static class CheckCommand
     public static Command Create(CliIO io)
     {
         var files = CommonOptions.Files("Winding files to check");
-        var format = CommonOptions.Format("text", "text", "json");
+        var format = CommonOptions.Format("text", "text", "json", "sarif");
         var warningsAsErrors = new Option<bool>("--warnings-as-errors") { Description = "Fail (exit 1) on warnings too" };
         var command = new Command("check", "Check winding files and report problems with their exact place") { files, format, warningsAsErrors };
         command.SetAction(parse => Run(io, parse.GetValue(files)!, parse.GetValue(format)!, parse.GetValue(warningsAsErrors)));
@@ -27,7 +27,14 @@ public static class CheckCommand
             results.Add((file, Compilation.Compile(file.Text, file.Path)));
         }
 
-        if (format == "json")
+        if (format == "sarif")
+        {
+            using var stream = new MemoryStream();
+            using (var json = DiagnosticJson.CreateWriter(stream))
+                SarifWriter.Write(json, results.Select(r => (r.File.DisplayName, r.Compilation)), typeof(CheckCommand).Assembly.GetName().Version?.ToString(3) ?? "0.0.0");
+            io.Out.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+        }
+        else if (format == "json")
         {
             using var stream = new MemoryStream();
             using (var json = DiagnosticJson.CreateWriter(stream))

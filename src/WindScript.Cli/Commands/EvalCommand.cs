@@ -1,4 +1,6 @@
 using System.CommandLine;
+using System.Globalization;
+using WindScript.Analysis;
 using WindScript.Cli.Output;
 using WindScript.Diagnostics;
 
@@ -10,22 +12,71 @@ public static class EvalCommand
     public static Command Create(CliIO io)
     {
         var file = CommonOptions.File("Winding file to evaluate");
-        var command = new Command("eval", "Evaluate a winding: machine, phases, turns, slot layout") { file };
-        command.SetAction(parse => Run(io, parse.GetValue(file)!));
+        var format = CommonOptions.Format("text", "text", "json", "csv");
+        var orders = new Option<int>("--orders")
+        {
+            Description = "Highest electrical order shown (harmonics n = v/p up to N)",
+            DefaultValueFactory = _ => 25,
+        };
+        orders.Validators.Add(r =>
+        {
+            if (r.GetValueOrDefault<int>() is < 1 or > 10_000) r.AddError("--orders must be between 1 and 10000");
+        });
+        var at = new Option<string>("--at")
+        {
+            Description = "Instant for the MMF and field: seconds, or with a unit (s, ms, us), e.g. 2.5ms",
+            DefaultValueFactory = _ => "0",
+        };
+        at.Validators.Add(r =>
+        {
+            if (ParseTime(r.GetValueOrDefault<string>()) is null) r.AddError($"--at: '{r.GetValueOrDefault<string>()}' is not a time (e.g. 0, 0.004, 2.5ms)");
+        });
+        var command = new Command("eval", "Evaluate a winding: winding factors, MMF harmonics and rotating waves, air-gap field, leakage, inductances")
+        {
+            file, format, orders, at,
+        };
+        command.SetAction(parse => Run(io, parse.GetValue(file)!, parse.GetValue(format)!, parse.GetValue(orders), ParseTime(parse.GetValue(at)!) ?? 0));
         return command;
     }
 
-    public static int Run(CliIO io, string path)
+    public static int Run(CliIO io, string path, string format = "text", int orders = 25, double time = 0)
     {
         if (InputFile.Read(path, io.In, io.Err) is not { } input) return ExitCodes.Usage;
         var compilation = Compilation.Compile(input.Text, input.Path);
-        DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
+        if (format == "text") DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
         if (compilation.Design is not { } design)
         {
+            if (format != "text") DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
             io.Err.WriteLine($"{input.DisplayName}: cannot evaluate: the file does not describe a complete machine and winding");
             return ExitCodes.Findings;
         }
-        EvalText.WriteSummary(io.Out, design);
+        var result = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = orders, Time = time });
+        switch (format)
+        {
+            case "json":
+                io.Out.WriteLine(EvalJson.Write(input.DisplayName, compilation.Source, compilation.Diagnostics, result));
+                break;
+            case "csv":
+                DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
+                EvalCsv.Write(io.Out, result);
+                break;
+            default:
+                EvalText.WriteSummary(io.Out, design);
+                EvalAnalysisText.Write(io.Out, result);
+                break;
+        }
         return compilation.Diagnostics.Any(d => d.Severity == Severity.Error) ? ExitCodes.Findings : ExitCodes.Ok;
+    }
+
+    /// <summary>A time in seconds from "0.004", "4ms", "2.5 ms", "250us" or "1s"; null if it is not one.</summary>
+    public static double? ParseTime(string? text)
+    {
+        if (string.IsNullOrWhiteSpace(text)) return null;
+        text = text.Trim();
+        (string Suffix, double Scale)[] units = [("ms", 1e-3), ("us", 1e-6), ("s", 1)];
+        double scale = 1;
+        foreach (var (suffix, factor) in units)
+            if (text.EndsWith(suffix, StringComparison.OrdinalIgnoreCase)) { text = text[..^suffix.Length].TrimEnd(); scale = factor; break; }
+        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v) ? v * scale : null;
     }
 }

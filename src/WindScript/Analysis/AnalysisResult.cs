@@ -28,6 +28,7 @@ public sealed record AnalysisResult(
     BackEmfSummary? BackEmf,
     ImmutableArray<DriveAnalysis> Drives,
     ImmutableArray<string> Assumptions,
+    ImmutableArray<string> Defaults,
     ImmutableArray<string> Notes);
 
 /// <summary>Core facts: Q, 2p, p, phases, q = Q/(2pm), periodicities and cogging order lcm(Q, 2p).</summary>

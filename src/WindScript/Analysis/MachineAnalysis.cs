@@ -26,11 +26,13 @@ public static class MachineAnalysis
         "inductances: air-gap part only (no slot, end-winding or skew leakage)",
     ];
 
+    /// <summary>Electrical order n = ν/p (0 for a design without poles, which the checker reports).</summary>
+    public static double ElectricalOrder(int order, int polePairs) => polePairs <= 0 ? 0 : (double)order / polePairs;
+
     public static AnalysisResult Evaluate(WindingDesign design, AnalysisOptions? options = null)
     {
         options ??= new AnalysisOptions();
         var notes = ImmutableArray.CreateBuilder<string>();
-        notes.AddRange(design.Defaults);
         var winding = WindingSpectrum.Of(design);
         var symmetry = WindingSymmetry.Of(design);
         var regular = RegularWinding.TryRecognise(design);
@@ -55,7 +57,7 @@ public static class MachineAnalysis
         var drives = design.Drives.Select(d => DriveOf(design, winding, d, options.Time, maxOrder, gap, backEmf)).ToImmutableArray();
 
         return new AnalysisResult(machine, summary, phases, double.IsFinite(leakage) ? leakage : null,
-            Balanced(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, notes.ToImmutable());
+            Balanced(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable());
     }
 
     private static ImmutableArray<PhaseAnalysis> Phases(WindingDesign design, WindingSpectrum winding, RegularWinding? regular, int maxOrder)
@@ -73,7 +75,7 @@ public static class MachineAnalysis
             {
                 if (factors[order - 1] <= Negligible) continue;
                 double sk = ClosedFormFactors.Skew(order, skew, design.Slots);
-                harmonics.Add(new PhaseHarmonic(order, (double)order / design.PolePairs, factors[order - 1] * sk, sk,
+                harmonics.Add(new PhaseHarmonic(order, ElectricalOrder(order, design.PolePairs), factors[order - 1] * sk, sk,
                     regular is null ? null : ClosedFormFactors.Distribution(order, regular.SlotsPerPolePerPhase, design.Slots),
                     regular is null ? null : ClosedFormFactors.Pitch(order, regular.CoilPitch, design.Slots),
                     winding.MmfPerAmpere(k, order)));
@@ -101,7 +103,7 @@ public static class MachineAnalysis
                 var (fw, bw) = TravellingWaves.At(winding, unit.Phasors.AsSpan(), order);
                 double forward = fw.Magnitude / working, backward = bw.Magnitude / working;
                 if (Math.Max(forward, backward) <= Negligible) continue;
-                waves.Add(new BalancedWave(order, (double)order / design.PolePairs, forward, backward));
+                waves.Add(new BalancedWave(order, ElectricalOrder(order, design.PolePairs), forward, backward));
                 int p = design.PolePairs;
                 if (order < p) sub.Add(order);
                 else if (order % p == 0 && order / p % 2 == 0) even.Add(order);
@@ -167,7 +169,7 @@ public static class MachineAnalysis
         {
             double amplitude = MmfStaircase.HarmonicAmplitude(winding, currents, order);
             if (order == design.PolePairs) fundamental = amplitude;
-            instant.Add(new MmfHarmonic(order, (double)order / design.PolePairs, amplitude));
+            instant.Add(new MmfHarmonic(order, ElectricalOrder(order, design.PolePairs), amplitude));
         }
         double instantLargest = instant.Count == 0 ? 0 : instant.Max(h => h.Amplitude);
         var shown = instant.Where(h => h.Amplitude > Negligible * instantLargest && instantLargest > 0).ToImmutableArray();

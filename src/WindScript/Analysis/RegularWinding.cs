@@ -34,17 +34,29 @@ public sealed record RegularWinding(int SlotsPerPolePerPhase, int CoilPitch)
         var reference = new int[q];
         for (int pitch = 1; pitch < 2 * m * belt; pitch++)
         {
-            Reference(belt, m, pitch, reference);
+            // A pitch whose go and return sides cancel inside a belt (y < q) gives a smaller
+            // closed-form factor than the same pattern without the cancelling sides: skip it.
+            if (!Reference(belt, m, pitch, reference)) continue;
             if (phases.All(c => MatchesRotated(c, reference))) return new RegularWinding(belt, pitch);
         }
         return null;
     }
 
-    /// <summary>Layer-summed conductors of the reference phase: top-layer belts, bottom layer = top shifted by y, reversed.</summary>
-    internal static void Reference(int belt, int phases, int pitch, Span<int> pattern)
+    /// <summary>
+    /// Layer-summed conductors of the reference phase: top-layer belts, bottom layer = top shifted
+    /// by y, reversed. Returns false when a slot holds a go and a return side of the phase (they cancel).
+    /// </summary>
+    internal static bool Reference(int belt, int phases, int pitch, Span<int> pattern)
     {
         int q = pattern.Length;
-        for (int s = 0; s < q; s++) pattern[s] = Top(s) - Top(((s - pitch) % q + q) % q);
+        bool cancels = false;
+        for (int s = 0; s < q; s++)
+        {
+            int top = Top(s), bottom = -Top(((s - pitch) % q + q) % q);
+            cancels |= top != 0 && top == -bottom;
+            pattern[s] = top + bottom;
+        }
+        return !cancels;
 
         int Top(int slot)
         {

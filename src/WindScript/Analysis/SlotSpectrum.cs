@@ -1,4 +1,6 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 
 namespace WindScript.Analysis;
 
@@ -22,7 +24,7 @@ public static class SlotSpectrum
     /// <summary>Mechanical angle of the centre of 0-based slot <paramref name="slotIndex"/>, in radians.</summary>
     public static double SlotAngle(int slotIndex, int slots) => 2 * Math.PI * (slotIndex + 0.5) / slots;
 
-    /// <summary>S(ν) directly from the slot values: Horner's rule in ζ = e^(−j2πν/Q), one sin/cos per order.</summary>
+    /// <summary>S(ν) directly from the slot values (Q multiply-adds; the angles come from a shared table per Q).</summary>
     public static Complex Direct(ReadOnlySpan<double> values, int order) => DirectCore(values, order);
 
     /// <inheritdoc cref="Direct(ReadOnlySpan{double}, int)"/>
@@ -33,7 +35,27 @@ public static class SlotSpectrum
     {
         int length = BaseBandLength(values.Length);
         if (destination.Length < length) throw new ArgumentException($"Need {length} entries for {values.Length} slots.", nameof(destination));
+        if (values.Length > FftThreshold)
+        {
+            ComputeBaseBandByFft(values, destination[..length]);
+            return;
+        }
         for (int order = 0; order < length; order++) destination[order] = DirectCore(values, order);
+    }
+
+    /// <summary>Above this slot count the base band comes from one FFT (O(Q log Q)) instead of Q/2 direct sums (O(Q²)).</summary>
+    public const int FftThreshold = 96;
+
+    // S(ν) = e^(−jνΔ/2) · DFT_ν(c) with Δ = 2π/Q; MathNet's Matlab convention is the unscaled
+    // forward transform with the negative exponent, X_ν = Σ c_s e^(−j2πνs/Q).
+    private static void ComputeBaseBandByFft(ReadOnlySpan<double> values, Span<Complex> destination)
+    {
+        int q = values.Length;
+        var buffer = new Complex[q];
+        for (int s = 0; s < q; s++) buffer[s] = values[s];
+        MathNet.Numerics.IntegralTransforms.Fourier.Forward(buffer, MathNet.Numerics.IntegralTransforms.FourierOptions.Matlab);
+        for (int order = 0; order < destination.Length; order++)
+            destination[order] = buffer[order] * Complex.FromPolarCoordinates(1, -Math.PI * order / q);
     }
 
     /// <summary>S(ν) for any order (negative orders give the conjugate) from a base band of a Q-slot distribution.</summary>
@@ -50,17 +72,41 @@ public static class SlotSpectrum
     {
         int q = values.Length;
         if (q == 0) return Complex.Zero;
-        // θ_s = (s + ½)Δ, so Σ c_s e^(−jνθ_s) = e^(−jνΔ/2) · Σ c_s ζ^s with ζ = e^(−jνΔ).
-        double step = -2 * Math.PI * (order % (2 * q)) / q;
-        var (zi, zr) = Math.SinCos(step);
-        double ar = 0, ai = 0;
-        for (int s = q - 1; s >= 0; s--)
+        // νθ_s = π·ν(2s + 1)/Q: every angle is a multiple of π/Q, read from a table of the 2Q
+        // points of the circle (exact to the last bit, and no dependency between slots).
+        var (cos, sin) = CircleTable.For(q);
+        int circle = 2 * q;
+        int nu = (int)(((long)order % circle + circle) % circle);
+        int index = nu, step = 2 * nu % circle;
+        double re = 0, im = 0;
+        // index stays in [0, 2Q) by construction, so the table reads skip bounds checks.
+        ref double cos0 = ref MemoryMarshal.GetArrayDataReference(cos);
+        ref double sin0 = ref MemoryMarshal.GetArrayDataReference(sin);
+        foreach (var value in values)
         {
-            double r = ar * zr - ai * zi + double.CreateTruncating(values[s]);
-            ai = ar * zi + ai * zr;
-            ar = r;
+            if (!T.IsZero(value))
+            {
+                double c = double.CreateTruncating(value);
+                re += c * Unsafe.Add(ref cos0, index);
+                im -= c * Unsafe.Add(ref sin0, index);
+            }
+            index += step;
+            if (index >= circle) index -= circle;
         }
-        var (hi, hr) = Math.SinCos(step / 2);
-        return new Complex(ar * hr - ai * hi, ar * hi + ai * hr);
+        return new Complex(re, im);
+    }
+
+    /// <summary>cos and sin of πi/Q for i = 0..2Q−1, built once per slot count and shared (read-only).</summary>
+    private static class CircleTable
+    {
+        private static readonly System.Collections.Concurrent.ConcurrentDictionary<int, (double[] Cos, double[] Sin)> Tables = new();
+
+        public static (double[] Cos, double[] Sin) For(int slots) => Tables.GetOrAdd(slots, static q =>
+        {
+            var cos = new double[2 * q];
+            var sin = new double[2 * q];
+            for (int i = 0; i < 2 * q; i++) (sin[i], cos[i]) = Math.SinCos(Math.PI * i / q);
+            return (cos, sin);
+        });
     }
 }

@@ -31,12 +31,15 @@ public static class TravellingWaves
     public static TravellingWave Describe(WindingSpectrum winding, CurrentPhasors currents, int order)
     {
         var (f, b) = At(winding, currents.Phasors.AsSpan(), order);
-        double electrical = (double)order / winding.PolePairs;
+        double electrical = MachineAnalysis.ElectricalOrder(order, winding.PolePairs);
         if (currents.IsDirect)
             return new TravellingWave(order, electrical, 0, 0, 0, (f + b).Magnitude, 0, 0, WaveKind.Standing);
         double speed = currents.Omega / order;
-        return new TravellingWave(order, electrical, currents.FrequencyHz, f.Magnitude, b.Magnitude, 0,
-            speed, speed * 60 / (2 * Math.PI), Classify(f.Magnitude, b.Magnitude));
+        double forward = f.Magnitude, backward = b.Magnitude, noise = 1e-12 * Math.Max(forward, backward);
+        if (forward < noise) forward = 0;      // cancellation leaves rounding residue, not a wave
+        if (backward < noise) backward = 0;
+        return new TravellingWave(order, electrical, currents.FrequencyHz, forward, backward, 0,
+            speed, speed * 60 / (2 * Math.PI), Classify(forward, backward));
     }
 
     private static WaveKind Classify(double forward, double backward)

@@ -34,9 +34,10 @@ public static class WindingFactors
             int net = 0;
             foreach (int c in slotConductors) net += c;
             double atMultiplesOfQ = Math.Abs(net) * inverse;
+            int r = half;                                 // order mod Q, kept without dividing
             for (int order = half + 1; order <= factors.Length; order++)
             {
-                int r = order % q;
+                if (++r == q) r = 0;
                 factors[order - 1] = r == 0 ? atMultiplesOfQ : r <= half ? factors[r - 1] : factors[q - r - 1];
             }
         }

@@ -32,11 +32,4 @@ public static partial class DiagnosticCatalog
         "the EMFs of its sides cancel and its pitch factor sin(y·p·π/Q) is zero, so the winding makes no working field. " +
         "Choose a pitch near the pole pitch Q/(2p). Source: J. Pyrhonen, T. Jokinen, V. Hrabovcova, Design of Rotating Electrical Machines, " +
         "2nd ed., Wiley 2014, ch. 2 (pitch factor).");
-
-    public static readonly DiagnosticDescriptor PathsUnequalEmf = new(
-        "WS6005", Severity.Error, "Parallel paths would carry unequal EMFs",
-        "Coils connected in parallel paths must have equal EMF phasors in every path, or currents circulate between the paths and heat " +
-        "the winding at no load. A synthesised winding consists of S identical sections around the bore (S = t or 2t, t = gcd(Q, p), the second " +
-        "when each section is followed by a reversed copy); each path must take the same share of sections, so the number of paths must divide S. " +
-        "Source: N. Bianchi, M. Dai Pre, IEE Proc. Electr. Power Appl., 2006 (star of slots: t identical spokes); common practice for parallel paths.");
 }

@@ -18,6 +18,7 @@ public enum SymbolKind
 public sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
 {
     private readonly List<TextSpan> _references = [];
+    private readonly HashSet<TextSpan> _seen = [];
 
     public string Name { get; } = name;
     public SymbolKind Kind { get; } = kind;
@@ -33,6 +34,6 @@ public sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
     internal void AddReference(TextSpan span)
     {
         // Loop bodies evaluate many times; record each place once.
-        if (_references.Count == 0 || _references[^1] != span && !_references.Contains(span)) _references.Add(span);
+        if (_seen.Add(span)) _references.Add(span);
     }
 }

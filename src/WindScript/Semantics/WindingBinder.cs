@@ -313,9 +313,10 @@ internal sealed class WindingBinder(
         if (y <= 0) return;
         int Wrap(int s) => (s - 1) % q + 1;
 
+        var unbalanced = UnbalancedPhases(collector);
         if (collector.Layers.TryGetValue("slots", out var single))
         {
-            BuildSingleLayer(single, q, y, turns, settings.Name, Wrap);
+            BuildSingleLayer(single, q, y, turns, settings.Name, Wrap, unbalanced);
             return;
         }
         collector.Layers.TryGetValue("top", out var top);
@@ -329,6 +330,7 @@ internal sealed class WindingBinder(
                 int ret = Wrap(s + y);
                 if (bottom is not null && (bottom[ret - 1].Phase != phase || bottom[ret - 1].Sign != -cell.Sign))
                 {
+                    if (unbalanced.Contains(phase)) continue; // reported once for the whole phase
                     diagnostics.Add(DiagnosticCatalog.PatternMismatch, bottom[ret - 1].Entry.Span,
                         $"the bottom layer of slot {ret} should hold {Signed(-cell.Sign, phase)} to close the coil from top slot {s} (pitch {y})");
                     continue;
@@ -348,19 +350,48 @@ internal sealed class WindingBinder(
         }
     }
 
-    private void BuildSingleLayer(List<PatternCell> cells, int q, int y, int turns, string group, Func<int, int> wrap)
+    // A phase whose '+' and '-' entries do not balance cannot be made of coils: say so once,
+    // for the phase, instead of once per unpaired entry.
+    private HashSet<int> UnbalancedPhases(PatternCollector collector)
+    {
+        var result = new HashSet<int>();
+        bool bothLayers = collector.Layers.ContainsKey("top") && collector.Layers.ContainsKey("bottom");
+        if (!collector.Layers.ContainsKey("slots") && !bothLayers) return result; // one derived layer always balances
+        var sums = new Dictionary<int, (int Plus, int Minus)>();
+        foreach (var cells in collector.Layers.Values)
+            foreach (var cell in cells)
+                if (cell.Phase is { } phase)
+                {
+                    var (plus, minus) = sums.GetValueOrDefault(phase);
+                    sums[phase] = cell.Sign > 0 ? (plus + 1, minus) : (plus, minus + 1);
+                }
+        var line = collector.LastLine.Values.Last();
+        foreach (var (phase, (plus, minus)) in sums.OrderBy(x => x.Key))
+        {
+            if (plus == minus) continue;
+            result.Add(phase);
+            diagnostics.Add(DiagnosticCatalog.PhaseSidesDoNotCancel, line.Layer.Span,
+                $"phase {Name(phase)} has {plus} '+' side{(plus == 1 ? "" : "s")} and {minus} '-' side{(minus == 1 ? "" : "s")} in this pattern; every coil needs one of each");
+        }
+        return result;
+    }
+
+    private void BuildSingleLayer(List<PatternCell> cells, int q, int y, int turns, string group, Func<int, int> wrap, HashSet<int> unbalanced)
     {
         var claimed = new bool[q];
+        var reported = new bool[q]; // entries already named as wrong are not read as go sides too
         for (int s = 1; s <= q; s++)
         {
             var cell = cells[s - 1];
-            if (cell.Phase is not { } phase || cell.Sign < 0) continue;
+            if (cell.Phase is not { } phase || cell.Sign < 0 || reported[s - 1]) continue;
             int ret = wrap(s + y);
             var other = cells[ret - 1];
             if (other.Phase != phase || other.Sign != -1 || claimed[ret - 1])
             {
+                if (unbalanced.Contains(phase) || other.Phase is { } o && unbalanced.Contains(o)) continue;
                 diagnostics.Add(DiagnosticCatalog.PatternMismatch, other.Entry.Span,
                     $"slot {ret} should hold -{Name(phase)} to close the coil from slot {s} (pitch {y})");
+                reported[ret - 1] = true;
                 continue;
             }
             claimed[ret - 1] = true;
@@ -369,7 +400,7 @@ internal sealed class WindingBinder(
         for (int s = 1; s <= q; s++)
         {
             var cell = cells[s - 1];
-            if (cell.Phase is { } phase && cell.Sign < 0 && !claimed[s - 1] && !Claimable(cells, s, y, q, wrap))
+            if (cell.Phase is { } phase && cell.Sign < 0 && !claimed[s - 1] && !unbalanced.Contains(phase) && !Claimable(cells, s, y, q, wrap))
                 diagnostics.Add(DiagnosticCatalog.PatternMismatch, cell.Entry.Span,
                     $"no coil returns in slot {s}: slot {wrap(s - y + q)} should hold {Name(phase)} (pitch {y})");
         }

@@ -231,8 +231,37 @@ public static class Parser
         Keyword("step").Then(Expression).Optional(),
         Body);
 
-    private static readonly Parser<Token, StatementSyntax> StatementCore = OneOf(
+    private static readonly Parser<Token, StatementSyntax> AnyStatement = OneOf(
         Let, Pattern, Property, Phases, Flag, Block, For, Coil, Balanced, PhaseCurrent);
+
+    private static readonly Parser<Token, StatementSyntax> PatternOrProperty = Pattern.Or(Property);
+
+    // The first token decides the statement, so a line costs one dictionary look-up instead of
+    // trying every alternative; anything else gets the full list of what could start a line.
+    private static readonly Dictionary<string, Parser<Token, StatementSyntax>> ByKeyword = BuildDispatch();
+
+    private static Dictionary<string, Parser<Token, StatementSyntax>> BuildDispatch()
+    {
+        var table = new Dictionary<string, Parser<Token, StatementSyntax>>(StringComparer.Ordinal)
+        {
+            ["let"] = Let,
+            ["phases"] = Phases,
+            ["for"] = For,
+            ["coil"] = Coil,
+            ["balanced"] = Balanced,
+        };
+        foreach (var word in Keywords.Blocks) table[word] = Block;
+        foreach (var word in Keywords.Flags) table[word] = Flag;
+        foreach (var word in Keywords.Properties) table[word] = Property;
+        foreach (var word in Keywords.PatternLayers) table[word] = Keywords.Properties.Contains(word) ? PatternOrProperty : Pattern;
+        return table;
+    }
+
+    private static readonly Parser<Token, StatementSyntax> StatementCore =
+        Lookahead(Any).Then(first => first.Kind != TokenKind.Word
+            ? AnyStatement
+            : ByKeyword.TryGetValue(first.Text, out var parser) ? parser
+            : Keywords.IsReserved(first.Text) ? AnyStatement : PhaseCurrent);
 
     // Skips the rest of a broken statement: to the end of its line, or over a whole braced
     // body if the line opened one, so the body's lines are not misread as outer statements.
@@ -247,8 +276,7 @@ public static class Parser
 
     private static readonly Parser<Token, StatementSyntax> StatementRule =
         Lookahead(Token(t => t.Kind is not (TokenKind.RBrace or TokenKind.End)))
-            .Then(Map((start, statement) => (start, statement), CurrentOffset, StatementCore.Before(EndOfStatement).Before(NewLine.SkipMany()))
-                .Select(x => x.statement)
+            .Then(StatementCore.Before(EndOfStatement).Before(NewLine.SkipMany())
                 .RecoverWith(error => Map((_, end) => MakeError(error, end), SkipLine, CurrentOffset)));
 
     // A '}' with no block to close, at top level.

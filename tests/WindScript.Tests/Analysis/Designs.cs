@@ -46,7 +46,7 @@ internal static class Designs
     /// (slot i to i + 1) has EMF angle p·2πi/Q and joins the phase whose 60° (π/m) sector holds it.
     /// Single layer: only every other tooth carries a coil.
     /// </summary>
-    public static WindingDesign ToothCoils(int slots, int poles, int layers = 2, int turns = 10, int phases = 3, Geometry? geometry = null)
+    public static WindingDesign ToothCoils(int slots, int poles, int layers = 2, int turns = 10, int phases = 3, Geometry? geometry = null, ImmutableArray<Drive> drives = default)
     {
         int p = poles / 2;
         var coils = new List<Coil>();
@@ -59,7 +59,7 @@ internal static class Designs
             int go = i + 1, back = (i + 1) % slots + 1;
             coils.Add(layers == 2 ? new Coil(phase, go, back, 1, 0, turns, sign) : new Coil(phase, go, back, 0, 0, turns, sign));
         }
-        return Create(slots, poles, phases, coils, layers, geometry: geometry);
+        return Create(slots, poles, phases, coils, layers, geometry: geometry, drives: drives);
     }
 
     /// <summary>Belt b (direction b·π/m electrical) to (phase, sign) for odd m with phase axes 2π/m apart.</summary>

@@ -112,6 +112,16 @@ public class WindingFactorTests
     }
 
     [Fact]
+    public void A_single_full_pitch_coil_is_not_a_regular_winding()
+    {
+        // Its conductor pattern equals belts of 12 with pitch 1, whose sides cancel inside the belt:
+        // k_d·k_p = 0.083 there, while the lone coil has k = 1 (common practice).
+        var d = Designs.Create(24, 2, 1, [new Coil(0, 1, 13, 0, 0, 50, 1)], layers: 1);
+        Assert.Null(RegularWinding.TryRecognise(d));
+        Assert.Equal(1, Factors(d, 0, 1)[0], 12);
+    }
+
+    [Fact]
     public void A_slot_whose_layers_cancel_lowers_the_factor()
     {
         // Two coils of one phase with opposite sides in slot 4: the sides count, their currents cancel.

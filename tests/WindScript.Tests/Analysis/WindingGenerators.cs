@@ -22,6 +22,13 @@ public sealed record BalancedWinding(WindingDesign Design, double Angle, double 
         $"Q={Design.Slots} 2p={Design.Poles} m={Design.Phases.Length} coils=[{string.Join(", ", Design.Winding.Coils.Where(c => c.Phase == 0).Select(c => $"{c.GoSlot}->{c.ReturnSlot}x{c.Turns * c.Polarity}"))}]";
 }
 
+/// <summary>A winding that may or may not be recognised as regular.</summary>
+public sealed record RegularCandidate(WindingDesign Design)
+{
+    public override string ToString() =>
+        $"Q={Design.Slots} 2p={Design.Poles} m={Design.Phases.Length} layers={Design.Winding.Layers} coils=[{string.Join(", ", Design.Winding.Coils.Select(c => $"{c.Phase}:{c.GoSlot}->{c.ReturnSlot}"))}]";
+}
+
 public static class WindingGenerators
 {
     private static Gen<Coil> CoilGen(int slots, int phases) =>
@@ -55,6 +62,20 @@ public static class WindingGenerators
          from angle in Gen.Choose(0, 359)
          from time in Gen.Choose(0, 1000)
          select new BalancedWinding(Copies(slots, 2 * pairs, phases, coils), angle * Math.PI / 180, time * 1e-5)).ToArbitrary();
+
+    /// <summary>Integral-slot windings of any q, pole count, pitch and layer count, rotated; and a few one-coil windings.</summary>
+    public static Arbitrary<RegularCandidate> Regular() =>
+        Gen.OneOf(
+            from q in Gen.Choose(1, 4)
+            from pairs in Gen.Choose(1, 4)
+            from pitch in Gen.Choose(1, 6 * q - 1)
+            from layers in Gen.Choose(1, 2)
+            from shift in Gen.Choose(0, 6 * q * pairs - 1)
+            select new RegularCandidate(Designs.Rotated(Designs.IntegralSlot(6 * q * pairs, 2 * pairs, pitch, layers), shift)),
+            from q in Gen.Choose(1, 12)
+            from span in Gen.Choose(1, 2 * q)
+            select new RegularCandidate(Designs.Create(2 * q, 2, 1, [new Coil(0, 1, 1 + span % (2 * q), 0, 0, 5, 1)], layers: 1)))
+        .ToArbitrary();
 
     private static WindingDesign Copies(int slots, int poles, int phases, Coil[] first)
     {

@@ -11,8 +11,10 @@ public class EmitRoundTripTests
     {
         text = WindEmitter.Emit(design);
         var compilation = Compilation.Compile(text);
-        Assert.True(compilation.Diagnostics.Count == 0,
-            text + "\n" + string.Join("\n", compilation.Diagnostics.Select(d => d.ToString())));
+        // Clean: nothing but the notes on harmonic content that the slot/pole choice itself
+        // implies (sub-harmonics, even harmonics, unbalanced pull), never an error.
+        var unexpected = compilation.Diagnostics.Where(d => d.Code is not ("WS3012" or "WS3013" or "WS3014")).ToArray();
+        Assert.True(unexpected.Length == 0, text + "\n" + string.Join("\n", unexpected.Select(d => d.ToString())));
         return compilation.Design!;
     }
 
