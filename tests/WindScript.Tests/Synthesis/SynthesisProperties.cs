@@ -59,7 +59,7 @@ public class SynthesisProperties
         var text = WindEmitter.Emit(d, new EmitOptions { Header = SynthesisHeader.Lines(result) });
         if (Formatter.Format(text) != text) return false;
         var compilation = Compilation.Compile(text);
-        if (compilation.Diagnostics.Count > 0) return false;
+        if (!EmitRoundTripTests.ChecksClean(compilation)) return false;
         EmitRoundTripTests.AssertSameModel(d, compilation.Design!);
         return true;
     }
