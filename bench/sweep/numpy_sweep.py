@@ -2,7 +2,7 @@
 --poles 2..60` (every feasible 3-phase double-layer combination, star-of-slots layout with the
 pole-pitch rule, winding factors at electrical orders 1..49, exact differential leakage),
 written as a vectorised NumPy script, so that both can be timed as whole processes on the
-same machine (see docs/sweep.md). Prints one JSON object per layout."""
+same machine (bench/sweep/run.sh; see docs/sweep.md). Prints one JSON object per layout."""
 import math
 import sys
 
