@@ -88,6 +88,20 @@ public class SynthSweepCliTests
         Assert.Equal(Run([.. args, "--threads", "1"]).Out, Run([.. args, "--threads", "3"]).Out);
     }
 
+    [Fact]
+    public void Sweep_draws_progress_on_standard_error_only_when_it_is_a_terminal()
+    {
+        string[] args = ["sweep", "--slots", "6..60", "--poles", "2..30"];
+        var plain = Run(args);
+        var o = new StringWriter();
+        var e = new StringWriter();
+        Assert.Equal(0, CliApp.Run(args, new CliIO(new StringReader(""), o, e, ErrIsTerminal: true)));
+        Assert.Equal(plain.Out, o.ToString());
+        Assert.Equal("", plain.Err);
+        Assert.Contains("sweep [", e.ToString());
+        Assert.Contains("100%", e.ToString());
+    }
+
     [Theory]
     [InlineData("--slots", "30..6", "--poles", "2..10")]
     [InlineData("--slots", "6..30", "--poles", "2..10", "--shard", "3/2")]
