@@ -97,9 +97,7 @@ public static class Feasibility
         string k = factor == 1 ? "" : $"{factor}·";
         string shape = belts.ShiftNumerator == 1 ? $"Q/({k}{d}·{tName})" : $"{belts.ShiftNumerator}·Q/({k}{belts.ShiftDenominator}·{tName})";
         string numbers = belts.ShiftNumerator == 1 ? $"{slots}/({k}{belts.ShiftDenominator}·{t})" : $"{belts.ShiftNumerator}·{slots}/({k}{belts.ShiftDenominator}·{t})";
-        long numerator = (long)slots * belts.ShiftNumerator, denominator = factor * belts.ShiftDenominator * t;
-        long g = WindingDesign.Gcd(numerator, denominator);
-        string value = denominator / g == 1 ? (numerator / g).ToString(inv) : $"{numerator / g}/{denominator / g}";
+        string value = Text.FractionText.Of((long)slots * belts.ShiftNumerator, factor * belts.ShiftDenominator * t);
         return $"{shape} = {numbers} = {value}";
     }
 

@@ -16,7 +16,7 @@ public static class SynthesisGenerators
     // Every feasible (phases, layers, pole pairs, slots) with up to 120 slots and 60 poles, listed
     // once, so that the generator picks among them instead of filtering (which could loop).
     private static readonly (int Phases, int Layers, int Pairs, int Slots)[] Combinations =
-        (from phases in new[] { 1, 2, 3, 4, 5, 6, 7 }
+        (from phases in new[] { 2, 3, 4, 5, 6, 7 }
          from layers in new[] { 1, 2 }
          from pairs in Enumerable.Range(1, 30)
          from slots in Enumerable.Range(2, 119)
