@@ -18,6 +18,10 @@ public static class CliApp
                 ExplainCommand.Create(io),
                 SynthCommand.Create(io),
                 SweepCommand.Create(io),
+                DiffCommand.Create(io),
+                ShowCommand.Create(io),
+                PlotCommand.Create(io),
+                ReportCommand.Create(io),
             };
             var parse = root.Parse(args);
             if (parse.Errors.Count > 0)

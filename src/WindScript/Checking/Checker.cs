@@ -18,7 +18,8 @@ public static class Checker
         GeometryChecks.Run(c);
         TurnCountChecks.Run(c);
         bool sound = Clean(c, FeasibilityCheck.Run);
-        sound = sound && !sourceHasErrors && c.EveryPhaseWound && Clean(c, LayoutChecks.Run);
+        // Two sides in one place is wrong whatever else is broken: this check is local.
+        sound = Clean(c, LayoutChecks.Run) && sound && !sourceHasErrors && c.EveryPhaseWound;
         // A reversed coil is the usual root cause of an unbalanced phase: name it, not the imbalance.
         sound = sound && Quiet(c, OpposingCoilCheck.Run);
         sound = sound && Clean(c, PhaseBalanceChecks.Run) && Clean(c, ParallelPathChecks.Run);

@@ -9,16 +9,18 @@ internal static class GeometryChecks
     public static void Run(CheckContext c)
     {
         var g = c.Design.Geometry;
-        var at = c.Design.MachineSpan;
+        var machine = c.Design.MachineSpan;
+        var keyword = machine with { Length = Math.Min(7, machine.Length) };
+        Text.TextSpan At(string property) => SourceEdits.PropertySpan(c.Syntax, machine, property) ?? keyword;
         string Mm(double metres) => (metres * 1000).ToString("0.###", CultureInfo.InvariantCulture) + " mm";
         if (g.Gap is { } gap && g.BoreRadius is { } radius && gap >= radius)
-            c.Diagnostics.Add(DiagnosticCatalog.GapTooLarge, at with { Length = 7 },
+            c.Diagnostics.Add(DiagnosticCatalog.GapTooLarge, At("gap"),
                 $"the air gap ({Mm(gap)}) is not smaller than the bore radius ({Mm(radius)})");
         if (g.SlotOpening is { } opening && g.SlotPitch(c.Design.Slots) is { } pitch && opening >= pitch)
-            c.Diagnostics.Add(DiagnosticCatalog.SlotOpeningTooWide, at with { Length = 7 },
+            c.Diagnostics.Add(DiagnosticCatalog.SlotOpeningTooWide, At("slot_opening"),
                 $"the slot opening ({Mm(opening)}) is not smaller than the slot pitch π·D/Q = {Mm(pitch)}");
         if (g.Gap is { } gp && g.RotorRadius is { } r && g.BoreRadius is { } br && Math.Abs(br - gp - r) > 1e-9)
-            c.Diagnostics.Add(DiagnosticCatalog.RadiiDisagree, at with { Length = 7 },
+            c.Diagnostics.Add(DiagnosticCatalog.RadiiDisagree, At("rotor_radius"),
                 $"bore radius {Mm(br)} minus gap {Mm(gp)} is {Mm(br - gp)}, but the rotor radius is {Mm(r)}");
     }
 }

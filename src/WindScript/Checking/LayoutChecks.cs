@@ -12,7 +12,8 @@ internal static class LayoutChecks
         int layers = d.Winding.Layers;
         var first = new Coil?[d.Slots, Math.Max(1, layers)];
         var reported = new HashSet<Coil>();
-        foreach (var coil in d.Winding.Coils)
+        // In source order, so the later line is the one reported.
+        foreach (var coil in d.Winding.Coils.OrderBy(x => x.Span.Start))
         {
             Place(coil, coil.GoSlot, coil.GoLayer);
             if (coil.ReturnSlot != coil.GoSlot || coil.ReturnLayer != coil.GoLayer) Place(coil, coil.ReturnSlot, coil.ReturnLayer);

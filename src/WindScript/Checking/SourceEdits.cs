@@ -36,6 +36,11 @@ internal static class SourceEdits
         return null;
     }
 
+    /// <summary>The span of the property statement 'keyword value' in the block at <paramref name="blockSpan"/>, if written.</summary>
+    public static TextSpan? PropertySpan(SyntaxTree? tree, TextSpan blockSpan, string keyword) =>
+        tree?.Root.Statements.OfType<BlockSyntax>().FirstOrDefault(b => b.Span == blockSpan)?.Body
+            .OfType<PropertySyntax>().FirstOrDefault(p => p.Keyword.Text == keyword)?.Span;
+
     private static T? Find<T>(IEnumerable<StatementSyntax> statements, TextSpan span) where T : StatementSyntax
     {
         foreach (var s in statements)

@@ -9,13 +9,17 @@ namespace WindScript.Diagnostics;
 /// </summary>
 public static partial class DiagnosticCatalog
 {
-    private static readonly Lazy<IReadOnlyList<DiagnosticDescriptor>> _all = new(() =>
-        typeof(DiagnosticCatalog)
+    private static readonly Lazy<IReadOnlyList<DiagnosticDescriptor>> _all = new(() => Collect(typeof(DiagnosticCatalog)));
+
+    // The annotation keeps the fields' metadata when the CLI is trimmed or compiled ahead of time.
+    private static IReadOnlyList<DiagnosticDescriptor> Collect(
+        [System.Diagnostics.CodeAnalysis.DynamicallyAccessedMembers(System.Diagnostics.CodeAnalysis.DynamicallyAccessedMemberTypes.PublicFields)] Type catalog) =>
+        catalog
             .GetFields(BindingFlags.Public | BindingFlags.Static)
             .Where(f => f.FieldType == typeof(DiagnosticDescriptor))
             .Select(f => (DiagnosticDescriptor)f.GetValue(null)!)
             .OrderBy(d => d.Code, StringComparer.Ordinal)
-            .ToArray());
+            .ToArray();
 
     /// <summary>Every entry, ordered by code.</summary>
     public static IReadOnlyList<DiagnosticDescriptor> All => _all.Value;

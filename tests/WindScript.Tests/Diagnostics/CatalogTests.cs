@@ -49,4 +49,12 @@ public class CatalogTests
                 $"{Path.GetFileName(file)}: " + string.Join("; ", c.Diagnostics.Select(d => $"{d.Code} {d.Message}")));
         }
     }
+
+    [Fact]
+    public void Syntax_errors_do_not_hide_physical_problems_in_the_parts_that_parsed()
+    {
+        var c = Compilation.Compile(File.ReadAllText(Path.Combine(Repo.Cases, "syntax_and_physics.wind")));
+        var codes = c.Diagnostics.Select(d => d.Code).ToArray();
+        Assert.Equal(["WS5001", "WS3002", "WS1001", "WS4002"], codes);
+    }
 }

@@ -1,0 +1,58 @@
+namespace WindScript.Reporting.Drawing;
+
+/// <summary>
+/// Our colours. Phases take hues from the Okabe–Ito set (M. Okabe, K. Ito, "Color Universal
+/// Design", 2008), which stays distinguishable under the common colour-vision deficiencies; every
+/// phase cell also carries its name and sign, so colour is never the only cue. Fields use a
+/// diverging blue–white–vermillion scale from the same set.
+/// </summary>
+public static class Palette
+{
+    public const string Ink = "#1b1b1b";
+    public const string Muted = "#6b6b6b";
+    public const string Grid = "#e3e3e3";
+    public const string Paper = "#ffffff";
+    public const string Iron = "#d9d4cc";
+    public const string IronEdge = "#8c857b";
+
+    /// <summary>Positive and negative ends of the diverging scale.</summary>
+    public const string Positive = "#d55e00";
+    public const string Negative = "#0072b2";
+
+    /// <summary>Curves: the staircase MMF and its fundamental; forward and backward waves.</summary>
+    public const string Staircase = "#1b1b1b";
+    public const string Fundamental = "#d55e00";
+    public const string Forward = "#0072b2";
+    public const string Backward = "#e69f00";
+    public const string Factor = "#009e73";
+
+    private static readonly string[] Phases = ["#0072b2", "#d55e00", "#009e73", "#cc79a7", "#e69f00", "#56b4e9", "#7a5c00", "#3d3d3d"];
+
+    /// <summary>The colour of phase k (0-based); cycles after eight phases.</summary>
+    public static string Phase(int k) => Phases[((k % Phases.Length) + Phases.Length) % Phases.Length];
+
+    /// <summary>A colour mixed towards white by t (0 = unchanged, 1 = white): the tint marks return (negative) sides.</summary>
+    public static string Tint(string color, double t)
+    {
+        var (r, g, b) = Rgb(color);
+        int Mix(int c) => (int)Math.Round(c + (255 - c) * t);
+        return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
+    }
+
+    /// <summary>The diverging scale at v in [-1, 1]: blue through white to vermillion.</summary>
+    public static string Diverging(double v)
+    {
+        v = Math.Clamp(v, -1, 1);
+        return Tint(v >= 0 ? Positive : Negative, 1 - Math.Abs(v));
+    }
+
+    public static (int R, int G, int B) Rgb(string color) =>
+        (Convert.ToInt32(color.Substring(1, 2), 16), Convert.ToInt32(color.Substring(3, 2), 16), Convert.ToInt32(color.Substring(5, 2), 16));
+
+    /// <summary>Black or white, whichever reads better on the colour.</summary>
+    public static string TextOn(string color)
+    {
+        var (r, g, b) = Rgb(color);
+        return 0.299 * r + 0.587 * g + 0.114 * b > 150 ? Ink : Paper;
+    }
+}

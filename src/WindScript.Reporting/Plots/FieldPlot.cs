@@ -1,0 +1,151 @@
+using System.Numerics;
+using WindScript.Analysis;
+using WindScript.Reporting.Drawing;
+
+namespace WindScript.Reporting.Plots;
+
+/// <summary>
+/// The air-gap field at an instant. Left, a cross-section: the gap ring (drawn enlarged) coloured
+/// by the radial flux density, the slots coloured by their current, and flux lines — contours of
+/// the flux function, radial across the gap and tangential in the iron. Right, the radial flux
+/// density around the gap with its fundamental.
+/// </summary>
+/// <remarks>
+/// The flux lines assume iron of high, uniform permeability: a solid rotor and a stator yoke whose
+/// outer surface carries no flux. Each space harmonic ν of the gap flux function ψ_ν then
+/// continues as (r/r_r)^ν into the rotor and as (x^−ν·X^2ν − x^ν)/(X^2ν − 1), x = r/r_s,
+/// X = r_o/r_s, into the yoke (solutions of Laplace's equation that match ψ at the gap and vanish
+/// at the outer surface). The radial B is the thin-gap value μ0·F/(k_C·δ) (Carter's coefficient).
+/// </remarks>
+public static class FieldPlot
+{
+    private const double RotorRadius = 0.60, BoreRadius = 0.70, SlotDepth = 0.10, OuterRadius = 1.0;
+
+    public static Scene Draw(Excitation x, GapSummary gap, double time)
+    {
+        var d = x.Design;
+        int q = d.Slots;
+        var levels = x.MmfLevels(time);
+        double? effectiveGap = gap.EffectiveGap;
+        // Radial B (T) per ampere-turn of MMF in the thin-gap model, or MMF itself without a gap.
+        double scale = effectiveGap is > 0 ? AirGapField.Mu0 / effectiveGap.Value : 1;
+        string quantity = effectiveGap is > 0 ? "radial flux density B (T)" : "MMF (A-turns): no bore and gap given";
+        var field = levels.Select(v => v * scale).ToArray();
+        var c = x.Harmonic(time, d.PolePairs) * scale;
+        double peak = Math.Max(1e-12, Math.Max(c.Magnitude, field.Select(Math.Abs).DefaultIfEmpty(0).Max()));
+
+        var s = new Scene(920, 500, $"Air-gap field of {d.Name}");
+        s.Text(20, 24, $"Air-gap field: {x.Name}, {x.DescribeTime(time)}", 14, bold: true);
+        s.Text(20, 42, x.DescribeCurrents(time), 11, Palette.Muted);
+
+        double cx = 235, cy = 270, unit = 200;
+        Point At(double r, double theta) => new(cx + unit * r * Math.Cos(theta), cy - unit * r * Math.Sin(theta));
+
+        // Stator iron, the gap ring coloured by B, the rotor.
+        s.Add(new CircleShape(new Point(cx, cy), unit * OuterRadius, new Stroke(Palette.IronEdge, 1), Palette.Iron));
+        for (int i = 0; i < q; i++)
+        {
+            double from = SlotSpectrum.SlotAngle(i, q), to = SlotSpectrum.SlotAngle(i + 1, q);
+            var wedge = new List<Point>();
+            for (int k = 0; k <= 6; k++) wedge.Add(At(BoreRadius, from + (to - from) * k / 6));
+            for (int k = 6; k >= 0; k--) wedge.Add(At(RotorRadius, from + (to - from) * k / 6));
+            s.Add(new PathShape(wedge, true, null, Palette.Diverging(field[i] / peak)));
+        }
+        s.Add(new CircleShape(new Point(cx, cy), unit * RotorRadius, new Stroke(Palette.IronEdge, 1), Palette.Iron));
+
+        // Slots: an opening at the bore, with the slot's current (A) as a coloured disc.
+        var currents = x.CurrentsAt(time);
+        var slotCurrent = new double[q];
+        for (int k = 0; k < x.Spectrum.Phases; k++)
+            for (int i = 0; i < q; i++) slotCurrent[i] += x.Spectrum.SlotConductors[k][i] / x.Spectrum.Paths * currents[k];
+        double largestCurrent = Math.Max(1e-12, slotCurrent.Select(Math.Abs).Max());
+        double halfWidth = Math.PI / q * 0.55;
+        for (int i = 0; i < q; i++)
+        {
+            double theta = SlotSpectrum.SlotAngle(i, q);
+            s.Add(new PathShape([At(BoreRadius, theta - halfWidth * 0.6), At(BoreRadius + SlotDepth, theta - halfWidth),
+                At(BoreRadius + SlotDepth, theta + halfWidth), At(BoreRadius, theta + halfWidth * 0.6)], true, new Stroke(Palette.IronEdge, 0.8), Palette.Paper));
+            double discRadius = Math.Min(unit * SlotDepth * 0.35, unit * (BoreRadius + SlotDepth / 2) * halfWidth * 0.8);
+            s.Add(new CircleShape(At(BoreRadius + SlotDepth / 2, theta), discRadius, new Stroke(Palette.IronEdge, 0.5), Palette.Diverging(slotCurrent[i] / largestCurrent)));
+        }
+        int every = Math.Max(1, q / 12);
+        for (int i = 0; i < q; i += every)
+        {
+            var label = At(OuterRadius + 0.06, SlotSpectrum.SlotAngle(i, q));
+            s.Label(label.X, label.Y, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), 9, Palette.Muted);
+        }
+
+        // Flux lines.
+        foreach (var line in FluxLines(x, time))
+            s.Polyline([.. line.Select(p => At(p.R, p.Theta))], new Stroke(Palette.Ink, 0.8));
+        s.Text(cx, s.Height - 8, "gap drawn enlarged; flux lines for iron of uniform high permeability", 10, Palette.Muted, Anchor.Middle);
+
+        // B around the gap.
+        var (yMin, yMax) = Ticks.Range(-peak, peak, 0.12, symmetric: true);
+        var area = new ChartArea(540, 70, 350, 330, 0, 360, yMin, yMax);
+        area.DrawAxes(s, "mechanical angle (degrees, counter-clockwise)", quantity, Staircases.DegreeTicks, null, ChartArea.Degrees);
+        Staircases.SlotMarks(s, area, q);
+        s.Polyline(Staircases.Points(area, field), new Stroke(Palette.Staircase, 1.6));
+        s.Polyline([.. Staircases.Sample(theta => (c * Complex.FromPolarCoordinates(1, d.PolePairs * theta)).Real).Select(p => area.At(p.X, p.Y))],
+            new Stroke(Palette.Fundamental, 2, [7, 4]));
+        area.DrawLegend(s, [("staircase", Palette.Staircase, false, null), ("fundamental", Palette.Fundamental, false, [7, 4])]);
+
+        // Colour key.
+        double kx = 560, ky = 466;
+        for (int k = 0; k < 40; k++) s.Rect(kx + k * 6, ky, 6.5, 12, Palette.Diverging(-1 + 2 * k / 39.0));
+        s.Text(kx, ky + 24, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 240, ky + 24, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? "gap: radial B (T); slots: current (relative)" : "gap: MMF; slots: current (relative)", 10, Palette.Muted, Anchor.Middle);
+        return s;
+    }
+
+    /// <summary>Contours of the flux function over the cross-section, as (radius, angle) in drawing units.</summary>
+    public static List<List<(double R, double Theta)>> FluxLines(Excitation x, double time, int lines = 18)
+    {
+        int q = x.Design.Slots, maxOrder = Math.Min(3 * q, 150);
+        var coefficients = new Complex[maxOrder + 1];
+        for (int order = 1; order <= maxOrder; order++) coefficients[order] = x.Harmonic(time, order) / new Complex(0, order);
+        const int columns = 240, rows = 72;
+        var radii = Enumerable.Range(0, rows).Select(i => 0.02 + (OuterRadius - 0.02) * i / (rows - 1)).ToArray();
+        var grid = new double[rows, columns];
+        var cosines = new double[columns];
+        var sines = new double[columns];
+        for (int order = 1; order <= maxOrder; order++)
+        {
+            if (coefficients[order].Magnitude == 0) continue;
+            for (int j = 0; j < columns; j++) (sines[j], cosines[j]) = Math.SinCos(order * 2 * Math.PI * j / columns);
+            for (int i = 0; i < rows; i++)
+            {
+                var c = coefficients[order] * Radial(order, radii[i]);
+                if (c.Magnitude < 1e-14) continue;
+                for (int j = 0; j < columns; j++) grid[i, j] += c.Real * cosines[j] - c.Imaginary * sines[j];
+            }
+        }
+        double min = double.MaxValue, max = double.MinValue;
+        foreach (double v in grid) { min = Math.Min(min, v); max = Math.Max(max, v); }
+        var result = new List<List<(double, double)>>();
+        if (!(max > min)) return result;
+        for (int k = 0; k < lines; k++)
+        {
+            double level = min + (max - min) * (k + 0.5) / lines;
+            foreach (var line in Contours.Trace(grid, level))
+                result.Add([.. line.Select(p => (Interpolate(radii, p.Row), 2 * Math.PI * p.Column / columns))]);
+        }
+        return result;
+    }
+
+    /// <summary>How harmonic ν of the gap flux function continues into the rotor, the gap and the yoke.</summary>
+    private static double Radial(int order, double r)
+    {
+        if (r <= RotorRadius) return Math.Pow(r / RotorRadius, order);
+        if (r <= BoreRadius) return 1;
+        double x = r / BoreRadius, big = Math.Pow(OuterRadius / BoreRadius, 2 * order);
+        return (big * Math.Pow(x, -order) - Math.Pow(x, order)) / (big - 1);
+    }
+
+    private static double Interpolate(double[] values, double index)
+    {
+        int i = Math.Clamp((int)Math.Floor(index), 0, values.Length - 2);
+        return values[i] + (values[i + 1] - values[i]) * (index - i);
+    }
+}
