@@ -11,12 +11,13 @@ namespace WindScript.Sweep;
 /// to rounding, at a third of the work and with no dependency chain; tests hold them together.
 /// </summary>
 /// <remarks>Orders beyond Q/2 repeat: k_w(ν) = k_w(ν mod Q) mirrored at Q/2, and 0 at multiples of Q.</remarks>
-internal sealed class CoilStarSpectrum
+internal sealed class CoilStarSpectrum(int slotCapacity)
 {
     private int _slots = -1;
     private double[] _cos = [], _sin = [], _sinHalf = [];
     private double[] _re = [], _im = [];
     private int[] _goSlots = [], _polarity = [];
+    private readonly int _capacity = slotCapacity;
 
     /// <summary>Fills factors[ν] for ν = 0..Q/2 (factors[0] = 0) for the coils of <paramref name="phase"/>.</summary>
     public void Compute(Synthesis.StarLayout layout, int phase, Span<double> factors)
@@ -65,13 +66,14 @@ internal sealed class CoilStarSpectrum
         _slots = q;
         if (_cos.Length < q)
         {
-            _cos = new double[q];
-            _sin = new double[q];
-            _sinHalf = new double[q];
-            _goSlots = new int[q];
-            _polarity = new int[q];
-            _re = new double[q / 2 + 1];
-            _im = new double[q / 2 + 1];
+            int n = Math.Max(q, Math.Max(_capacity, 2 * _cos.Length));
+            _cos = new double[n];
+            _sin = new double[n];
+            _sinHalf = new double[n];
+            _goSlots = new int[n];
+            _polarity = new int[n];
+            _re = new double[n / 2 + 1];
+            _im = new double[n / 2 + 1];
         }
         for (int k = 0; k < q; k++)
         {

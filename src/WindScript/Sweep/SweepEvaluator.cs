@@ -22,17 +22,24 @@ public sealed class SweepEvaluator
 
     private readonly SweepSpec _spec;
     private readonly PhaseBelts _belts;
-    private readonly StarLayout _layout = new();
-    private readonly CoilStarSpectrum _spectrum = new();
-    private int[] _conductors = [];
-    private double[] _factors = [];
-    private bool[] _present = [];
+    private readonly StarLayout _layout;
+    private readonly CoilStarSpectrum _spectrum;
+    private int[] _conductors;
+    private double[] _factors;
+    private bool[] _present;
 
     public SweepEvaluator(SweepSpec spec)
     {
         if (spec.Problem() is { } problem) throw new ArgumentException(problem, nameof(spec));
         _spec = spec;
         _belts = PhaseBelts.ForPhases(spec.Phases)!;
+        // Sized once for the largest slot count, so that memory stays flat along the sweep.
+        int q = spec.SlotsTo;
+        _layout = new StarLayout(q);
+        _spectrum = new CoilStarSpectrum(q);
+        _conductors = new int[spec.Phases * q];
+        _factors = new double[q / 2 + 1];
+        _present = new bool[q / 2 + 1];
     }
 
     /// <summary>Evaluates one candidate into <paramref name="record"/>; false if it admits no balanced layout (the record is then unchanged).</summary>
