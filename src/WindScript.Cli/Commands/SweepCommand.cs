@@ -63,24 +63,23 @@ public static class SweepCommand
         }
 
         var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
-        string header = SweepFormat.Create(format, orders).Header;
-        if (header.Length > 0) io.Out.Write(header);
+        var output = new RecordOutput(io);
+        output.Write(SweepFormat.Create(format, orders).Header);
         long done = 0;
-        var scratch = new char[64 * 1024];
         OrderedBatches.Run(
             SweepPlan.Shard(spec, shard), threads, batchSize: 16, window: 8 * threads,
             () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: SweepFormat.Create(format, orders)),
-            (state, candidate, output) =>
+            (state, candidate, buffer) =>
             {
-                if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, output);
+                if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, buffer);
             },
             (bytes, count) =>
             {
-                Ascii.Write(io.Out, bytes.Span, ref scratch);
+                output.Write(bytes.Span);
                 done += count;
                 progress?.Report(done);
             });
-        io.Out.Flush();
+        output.Flush();
         progress?.Finish();
         return ExitCodes.Ok;
     }

@@ -20,7 +20,7 @@ public static partial class DiagnosticCatalog
         "Source: N. Bianchi, M. Dai Pre, IEE Proc. Electr. Power Appl., 2006.");
 
     public static readonly DiagnosticDescriptor PitchNotBalanced = new(
-        "WS6003", Severity.Error, "No balanced single-layer winding with this coil pitch",
+        "WS6003", Severity.Error, "No balanced winding with this coil pitch",
         "In a single-layer winding with every coil of pitch y, the go and return sides alternate along the chain of slots s, s + y, s + 2y, ...; " +
         "that chain closes after Q/gcd(Q, y) slots, which must be even, and the go sides it selects must form a balanced star of slots. " +
         "The message lists the pitches that work for these slot and pole counts. A double-layer winding accepts any pitch. " +

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using WindScript.Model;
 using WindScript.Semantics;
+using WindScript.Text;
 
 namespace WindScript.Emit;
 
@@ -76,12 +77,7 @@ public static class WindEmitter
         o.Append("}\n");
     }
 
-    private static string PitchComment(WindingDesign d)
-    {
-        long g = WindingDesign.Gcd(d.Slots, d.Poles);
-        string pole = d.Poles / g == 1 ? $"{d.Slots / g}" : $"{d.Slots / g}/{d.Poles / g}";
-        return $"pole pitch {pole} slots";
-    }
+    private static string PitchComment(WindingDesign d) => $"pole pitch {FractionText.Of(d.Slots, d.Poles)} slots";
 
     private static void WritePattern(StringBuilder o, WindingDesign d, PatternForm pattern, string[] phases, int perLine)
     {

@@ -6,9 +6,9 @@ namespace WindScript.Sweep;
 
 /// <summary>
 /// Lays out and evaluates swept layouts, reusing its buffers (one evaluator per thread). The
-/// figures are those of the analysis model: winding factors from the coil sides
-/// (<see cref="Analysis.WindingFactors"/>), differential leakage exact over all orders
-/// (<see cref="Analysis.DifferentialLeakage"/>).
+/// figures are those of the analysis model: winding factors from the coils
+/// (<see cref="CoilStarSpectrum"/>, equal to <see cref="Analysis.WindingFactors"/> to rounding),
+/// differential leakage exact over all orders (<see cref="Analysis.DifferentialLeakage"/>).
 /// </summary>
 /// <remarks>
 /// The synthesised phases are copies of phase 0 shifted by k·Δ slots, so S_k(ν) = S_0(ν)·e^(−j2πνkΔ/Q):
@@ -22,16 +22,24 @@ public sealed class SweepEvaluator
 
     private readonly SweepSpec _spec;
     private readonly PhaseBelts _belts;
-    private readonly StarLayout _layout = new();
-    private int[] _conductors = [];
-    private double[] _factors = [];
-    private bool[] _present = [];
+    private readonly StarLayout _layout;
+    private readonly CoilStarSpectrum _spectrum;
+    private int[] _conductors;
+    private double[] _factors;
+    private bool[] _present;
 
     public SweepEvaluator(SweepSpec spec)
     {
         if (spec.Problem() is { } problem) throw new ArgumentException(problem, nameof(spec));
         _spec = spec;
         _belts = PhaseBelts.ForPhases(spec.Phases)!;
+        // Sized once for the largest slot count, so that memory stays flat along the sweep.
+        int q = spec.SlotsTo;
+        _layout = new StarLayout(q);
+        _spectrum = new CoilStarSpectrum(q);
+        _conductors = new int[spec.Phases * q];
+        _factors = new double[q / 2 + 1];
+        _present = new bool[q / 2 + 1];
     }
 
     /// <summary>Evaluates one candidate into <paramref name="record"/>; false if it admits no balanced layout (the record is then unchanged).</summary>
@@ -44,14 +52,15 @@ public sealed class SweepEvaluator
         EnsureCapacity(q, m, p);
         var conductors = _conductors.AsSpan(0, m * q);
         for (int k = 0; k < m; k++) _layout.SlotConductors(k, conductors.Slice(k * q, q));
-        var phase0 = conductors[..q];
-        int sides = CountSides(q);
-
-        int orders = _spec.Orders, half = q / 2;
-        var factors = _factors.AsSpan(0, Math.Max(orders * p, half + 1));
-        Analysis.WindingFactors.Compute(phase0, sides, 0, factors);
+        int orders = _spec.Orders;
+        var factors = _factors.AsSpan(0, q / 2 + 1);   // base band: factors[ν], ν = 0..Q/2
+        _spectrum.Compute(_layout, 0, factors);
         if (record.WindingFactors.Length != orders) record.WindingFactors = new double[orders];
-        for (int n = 1; n <= orders; n++) record.WindingFactors[n - 1] = factors[n * p - 1];
+        for (int n = 1; n <= orders; n++)
+        {
+            long order = (long)n * p;
+            record.WindingFactors[n - 1] = order % q == 0 ? 0 : factors[Fold(order, q)];
+        }
 
         record.Slots = q;
         record.Poles = poles;
@@ -65,16 +74,6 @@ public sealed class SweepEvaluator
         MarkPresentOrders(q, p, m, _layout.PhaseStep, factors);
         FillOrderFlags(q, p, record);
         return true;
-    }
-
-    // Σ|n| over every coil side of phase 0: a slot may hold two sides of the phase that cancel.
-    private int CountSides(int q)
-    {
-        int sides = 0;
-        for (int l = 0; l < _layout.Layers; l++)
-            for (int s = 0; s < q; s++)
-                if (_layout.PhaseAt(s, l) == 0) sides++;
-        return sides;
     }
 
     // present[ν] for ν = 0..Q/2: does a wave of order ν exist under balanced currents (relative size above Negligible)?
@@ -92,7 +91,7 @@ public sealed class SweepEvaluator
         long shift = (long)_belts.ShiftNumerator * q;                        // φ in the same units
         long along = (long)order % q * step % q * _belts.ShiftDenominator;   // ν·Δ/Q turns
         double g = Math.Max(Geometric(along - shift, turn, m), Geometric(along + shift, turn, m));
-        return factors[Fold(order, q) - 1] * g / order;
+        return factors[Fold(order, q)] * g / order;
     }
 
     // |Σ_k e^(−jkβ)| for β = 2π·b/turn: exactly 0 when m·b is a whole number of turns and b is not.
@@ -101,15 +100,15 @@ public sealed class SweepEvaluator
         b %= turn;
         if (b < 0) b += turn;
         if (b == 0) return m;
-        if ((Int128)b * m % turn == 0) return 0;
+        if (b * m % turn == 0) return 0;   // b < Q·den and m ≤ 64: no overflow
         double beta = 2 * Math.PI * b / turn;
         return Math.Abs(Math.Sin(m * beta / 2) / Math.Sin(beta / 2));
     }
 
     // The base-band order (1..Q/2) with the same spectrum magnitude as order ν (which is not a multiple of Q).
-    private static int Fold(int order, int q)
+    private static int Fold(long order, int q)
     {
-        int r = order % q;
+        int r = (int)(order % q);
         return r <= q / 2 ? r : q - r;
     }
 
@@ -140,8 +139,7 @@ public sealed class SweepEvaluator
     private void EnsureCapacity(int q, int m, int p)
     {
         if (_conductors.Length < m * q) _conductors = new int[m * q];
-        int needed = Math.Max(_spec.Orders * p, q / 2 + 1);
-        if (_factors.Length < needed) _factors = new double[needed];
+        if (_factors.Length < q / 2 + 1) _factors = new double[q / 2 + 1];
         if (_present.Length < q / 2 + 1) _present = new bool[q / 2 + 1];
     }
 }

@@ -30,7 +30,7 @@ public sealed record SweepSpec
         if (PolesTo < PolesFrom) return $"the pole range {PolesFrom}..{PolesTo} is empty";
         if (PolesTo > 200_000) return "at most 200000 poles";
         if (PolesFrom == PolesTo && PolesFrom % 2 != 0) return $"the pole count must be even, not {PolesFrom}";
-        if (Phases is < 1 or > 64) return $"the phase count must be from 1 to 64, not {Phases}";
+        if (Phases is < 2 or > 64) return $"the phase count must be from 2 to 64, not {Phases}";
         if (Layers is not (1 or 2)) return $"a winding has 1 or 2 layers, not {Layers}";
         if (Orders is < 1 or > 10_000) return $"the number of orders must be from 1 to 10000, not {Orders}";
         return null;

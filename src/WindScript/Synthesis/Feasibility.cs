@@ -16,7 +16,8 @@ namespace WindScript.Synthesis;
 /// A single-layer winding puts a coil side in every other slot (its go sides; the returns fill
 /// the rest), so it needs Q even and the same condition for the star of the Q/2 go sides:
 /// Q/(2m·t*) a whole number with t* = gcd(Q/2, p), which is the paper's single-layer condition
-/// (t* = t when Q/t is even, t/2 when Q/t is odd).
+/// (t* = t when Q/t is even, t/2 when Q/t is odd). For any phase count the star must also have
+/// at least two spokes (p not a multiple of Q), or no coil links flux.
 /// </remarks>
 public static class Feasibility
 {
@@ -43,6 +44,7 @@ public static class Feasibility
     public static bool IsFeasible(int slots, int polePairs, PhaseBelts belts, int layers)
     {
         if (slots < 1 || polePairs < 1) return false;
+        if (polePairs % slots == 0) return false;   // one spoke: every slot sees the same EMF, no coil links flux
         if (layers == 1) return slots % 2 == 0 && StarTurnsOntoItself(slots / 2, polePairs, belts);
         return StarTurnsOntoItself(slots, polePairs, belts);
     }
@@ -74,6 +76,8 @@ public static class Feasibility
     /// <summary>The condition in words, with this machine's numbers ("Q/(m·t) = 9/(3·1) = 3 must be a whole number, ...").</summary>
     public static string Describe(int slots, int polePairs, PhaseBelts belts, int layers)
     {
+        if (polePairs % slots == 0)
+            return $"the star of slots needs at least two spokes, Q/t ≥ 2 with t = gcd(Q, p) = gcd({slots}, {polePairs}) = {slots}: every slot sees the same EMF";
         if (layers == 1)
         {
             if (slots % 2 != 0)
@@ -93,9 +97,7 @@ public static class Feasibility
         string k = factor == 1 ? "" : $"{factor}·";
         string shape = belts.ShiftNumerator == 1 ? $"Q/({k}{d}·{tName})" : $"{belts.ShiftNumerator}·Q/({k}{belts.ShiftDenominator}·{tName})";
         string numbers = belts.ShiftNumerator == 1 ? $"{slots}/({k}{belts.ShiftDenominator}·{t})" : $"{belts.ShiftNumerator}·{slots}/({k}{belts.ShiftDenominator}·{t})";
-        long numerator = (long)slots * belts.ShiftNumerator, denominator = factor * belts.ShiftDenominator * t;
-        long g = WindingDesign.Gcd(numerator, denominator);
-        string value = denominator / g == 1 ? (numerator / g).ToString(inv) : $"{numerator / g}/{denominator / g}";
+        string value = Text.FractionText.Of((long)slots * belts.ShiftNumerator, factor * belts.ShiftDenominator * t);
         return $"{shape} = {numbers} = {value}";
     }
 

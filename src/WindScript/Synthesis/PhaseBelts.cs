@@ -48,7 +48,11 @@ public sealed class PhaseBelts
         return (_sectorPhase[sector], _sectorSign[sector]);
     }
 
-    /// <summary>The belt that (phase, sign) becomes when the star turns by one phase shift.</summary>
+    /// <summary>
+    /// The belt that (phase, sign) becomes when the star turns by one phase shift. A side whose
+    /// belt the table lacks (the negative sides of an even phase count at 360/m, whose belts
+    /// coincide with other phases' positive ones) turns like its reversal, reversed.
+    /// </summary>
     public (int Phase, int Sign) Rotate(int phase, int sign)
     {
         for (int j = 0; j < Sectors; j++)
@@ -57,7 +61,13 @@ public sealed class PhaseBelts
                 int to = (j + SectorsPerShift) % Sectors;
                 return (_sectorPhase[to], _sectorSign[to]);
             }
-        return (-1, 0);   // not a belt of this table
+        for (int j = 0; j < Sectors; j++)
+            if (_sectorPhase[j] == phase && _sectorSign[j] == -sign)
+            {
+                int to = (j + SectorsPerShift) % Sectors;
+                return (_sectorPhase[to], -_sectorSign[to]);
+            }
+        return (-1, 0);
     }
 
     /// <summary>

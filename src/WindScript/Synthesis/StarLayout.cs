@@ -7,9 +7,17 @@ namespace WindScript.Synthesis;
 /// </summary>
 public sealed class StarLayout
 {
-    private int[] _phase = [];
-    private int[] _sign = [];
-    private int[] _coilPolarity = [];
+    private int[] _phase;
+    private int[] _sign;
+    private int[] _coilPolarity;
+
+    /// <summary>A layout with room for <paramref name="slotCapacity"/> slots in two layers (it grows when needed).</summary>
+    public StarLayout(int slotCapacity = 0)
+    {
+        _phase = new int[2 * slotCapacity];
+        _sign = new int[2 * slotCapacity];
+        _coilPolarity = new int[slotCapacity];
+    }
 
     public int Slots { get; private set; }
     public int PolePairs { get; private set; }
@@ -48,10 +56,10 @@ public sealed class StarLayout
         int cells = slots * layers;
         if (_phase.Length < cells)
         {
-            _phase = new int[cells];
-            _sign = new int[cells];
+            _phase = new int[Math.Max(cells, 2 * _phase.Length)];   // geometric: a sweep's growing Q reallocates rarely
+            _sign = new int[_phase.Length];
         }
-        if (_coilPolarity.Length < slots) _coilPolarity = new int[slots];
+        if (_coilPolarity.Length < slots) _coilPolarity = new int[Math.Max(slots, 2 * _coilPolarity.Length)];
         Array.Fill(_phase, -1, 0, cells);
         Array.Clear(_sign, 0, cells);
         Array.Clear(_coilPolarity, 0, slots);

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using WindScript.Analysis;
 using WindScript.Model;
+using WindScript.Text;
 
 namespace WindScript.Synthesis;
 
@@ -22,16 +23,10 @@ public static class SynthesisHeader
             $"{q} slots, {poles} poles, {m} phase{(m == 1 ? "" : "s")}, {layers}, coil pitch {result.Pitch} slot{(result.Pitch == 1 ? "" : "s")}:",
             "a balanced winding laid out by the star of slots (N. Bianchi, M. Dai Pre,",
             "IEE Proc. Electr. Power Appl., 2006).",
-            $"q = {Fraction(q, poles * m)} slots per pole per phase; periodicity t = gcd(Q, p) = {d.Periodicity};",
+            $"q = {FractionText.Of(q, poles * m)} slots per pole per phase; periodicity t = gcd(Q, p) = {d.Periodicity};",
             $"cogging order lcm(Q, 2p) = {WindingDesign.Lcm(q, poles)}; fundamental winding factor {factors[d.PolePairs - 1].ToString("0.0000", inv)};",
             $"{result.Sections} identical section{(result.Sections == 1 ? "" : "s")}, so {paths}.",
             "An idealised analysis aid: verify by finite-element analysis and test before build.",
         ];
-    }
-
-    private static string Fraction(int numerator, int denominator)
-    {
-        long g = WindingDesign.Gcd(numerator, denominator);
-        return denominator / g == 1 ? $"{numerator / g}" : $"{numerator / g}/{denominator / g}";
     }
 }

@@ -38,7 +38,7 @@ public sealed record SynthesisRequest
     {
         if (Slots < 2) return $"the slot count must be at least 2, not {Slots}";
         if (Poles < 2 || Poles % 2 != 0) return $"the pole count must be even and at least 2, not {Poles}";
-        if (Phases < 1) return $"there must be at least one phase, not {Phases}";
+        if (Phases < 2) return $"a balanced winding needs at least two phases, not {Phases}";
         if (Phases > 64) return $"at most 64 phases are supported, not {Phases}";
         if (Layers is not (1 or 2)) return $"a winding has 1 or 2 layers, not {Layers}";
         if (Pitch is { } y && (y < 1 || y >= Slots)) return $"the coil pitch must be from 1 to {Slots - 1} slots, not {y}";

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using WindScript.Diagnostics;
 using WindScript.Model;
+using WindScript.Text;
 
 namespace WindScript.Synthesis;
 
@@ -127,19 +128,14 @@ public static class WindingSynthesizer
         if (outcome == LayoutOutcome.NoFundamental)
             return DiagnosticCatalog.PitchLinksNoFlux.At(default,
                 $"a coil pitch of {pitch} slots spans {(long)pitch * polePairs / slots} whole pole pair{(pitch * polePairs / slots == 1 ? "" : "s")} " +
-                $"(y·p = {pitch * polePairs} is a multiple of Q = {slots}), so the EMFs of its sides cancel; the pole pitch is {PoleText(slots, 2 * polePairs)} slots");
+                $"(y·p = {pitch * polePairs} is a multiple of Q = {slots}), so the EMFs of its sides cancel; the pole pitch is {FractionText.Of(slots, 2 * polePairs)} slots");
         var works = BalancedPitches(slots, polePairs, belts, layers);
         string reason = outcome == LayoutOutcome.OddCycle
             ? $"stepping by {pitch} slots visits {slots / WindingDesign.Gcd(slots, pitch)} slots before it returns, an odd number, so go and return sides cannot alternate"
             : $"the go sides that pitch selects do not form a balanced star";
         string list = works.Count == 0 ? "no pitch works" : "pitches that work: " + string.Join(", ", works.Take(12)) + (works.Count > 12 ? ", ..." : "");
-        return DiagnosticCatalog.PitchNotBalanced.At(default, $"no balanced single-layer winding with a coil pitch of {pitch} slots: {reason}; {list}");
-    }
-
-    private static string PoleText(int slots, int poles)
-    {
-        long g = WindingDesign.Gcd(slots, poles);
-        return poles / g == 1 ? $"{slots / g}" : $"{slots / g}/{poles / g}";
+        string what = layers == 1 ? "single-layer winding" : "winding";
+        return DiagnosticCatalog.PitchNotBalanced.At(default, $"no balanced {what} with a coil pitch of {pitch} slots: {reason}; {list}");
     }
 
     private static IEnumerable<int> Divisors(int n) => Enumerable.Range(1, n).Where(d => n % d == 0);

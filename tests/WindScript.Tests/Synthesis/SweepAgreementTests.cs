@@ -16,21 +16,24 @@ public class SweepAgreementTests
     [InlineData(6, 36, 2, 24, 1, "pole")]
     [InlineData(12, 24, 2, 12, 2, "all")]
     [InlineData(18, 36, 2, 8, 2, "pole-1")]
-    public void Records_agree_with_the_analysis_of_the_emitted_file(int slotsFrom, int slotsTo, int polesFrom, int polesTo, int layers, string rule)
+    [InlineData(4, 40, 2, 20, 2, "pole", 2)]
+    [InlineData(10, 60, 2, 20, 2, "pole", 5)]
+    [InlineData(10, 60, 2, 12, 1, "pole", 5)]
+    public void Records_agree_with_the_analysis_of_the_emitted_file(int slotsFrom, int slotsTo, int polesFrom, int polesTo, int layers, string rule, int phases = 3)
     {
         var spec = new SweepSpec
         {
             SlotsFrom = slotsFrom, SlotsTo = slotsTo, PolesFrom = polesFrom, PolesTo = polesTo,
-            Layers = layers, Pitch = PitchRule.Parse(rule, out _)!, Orders = 13,
+            Layers = layers, Pitch = PitchRule.Parse(rule, out _)!, Orders = 13, Phases = phases,
         };
         int count = 0;
         foreach (var r in LayoutSweep.Records(spec))
         {
             count++;
-            var synthesis = WindingSynthesizer.Synthesize(new SynthesisRequest { Slots = r.Slots, Poles = r.Poles, Layers = r.Layers, Pitch = r.Pitch });
+            var synthesis = WindingSynthesizer.Synthesize(new SynthesisRequest { Slots = r.Slots, Poles = r.Poles, Layers = r.Layers, Pitch = r.Pitch, Phases = phases });
             var design = Compilation.Compile(WindEmitter.Emit(synthesis.Design!)).Design!;
             int p = design.PolePairs;
-            var a = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = 2 * r.Slots + 2 });
+            var a = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = Math.Max(spec.Orders, 2 * r.Slots + 2) });
             string at = $"{r.Slots} slots, {r.Poles} poles, pitch {r.Pitch}";
 
             for (int n = 1; n <= spec.Orders; n++)
