@@ -12,7 +12,7 @@ public static class Lexer
 {
     public static (Token[] Tokens, Comment[] Comments) Lex(string text)
     {
-        var tokens = new List<Token>(text.Length / 4 + 4);
+        using var tokens = new TokenBuffer(text.Length / 3);
         // Files repeat the same few words ("coil", "U", "turns") thousands of times: share one string each.
         var pool = new Dictionary<string, string>(StringComparer.Ordinal).GetAlternateLookup<ReadOnlySpan<char>>();
         string Text(int start, int end)
@@ -35,7 +35,7 @@ public static class Lexer
                 int start = i;
                 i += c == '\r' && i + 1 < text.Length && text[i + 1] == '\n' ? 2 : 1;
                 // Only a line that had code ends a statement; the newline token is folded.
-                if (tokens.Count > 0 && tokens[^1].Kind != TokenKind.NewLine && lineHasCode)
+                if (tokens.Count > 0 && tokens.Last.Kind != TokenKind.NewLine && lineHasCode)
                     tokens.Add(new Token(TokenKind.NewLine, "\n", TextSpan.FromBounds(start, i)));
                 lineHasCode = false;
                 continue;
