@@ -57,7 +57,7 @@ public static class MachineAnalysis
         var drives = design.Drives.Select(d => DriveOf(design, winding, d, options.Time, maxOrder, gap, backEmf)).ToImmutableArray();
 
         return new AnalysisResult(machine, summary, phases, double.IsFinite(leakage) ? leakage : null,
-            Balanced(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable());
+            BalancedWaves(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable());
     }
 
     private static ImmutableArray<PhaseAnalysis> Phases(WindingDesign design, WindingSpectrum winding, RegularWinding? regular, int maxOrder)
@@ -86,7 +86,11 @@ public static class MachineAnalysis
         return result.MoveToImmutable();
     }
 
-    private static BalancedSpectrum Balanced(WindingDesign design, WindingSpectrum winding, int maxOrder)
+    /// <summary>
+    /// The waves balanced unit currents make, orders 1..<paramref name="maxOrder"/> (mechanical),
+    /// relative to the working wave, with the sub-, even and inter-harmonic orders among them.
+    /// </summary>
+    public static BalancedSpectrum BalancedWaves(WindingDesign design, WindingSpectrum winding, int maxOrder)
     {
         var unit = CurrentPhasors.Balanced(design.Phases.Length, design.PhaseShiftDegrees * Math.PI / 180);
         var (f, b) = TravellingWaves.At(winding, unit.Phasors.AsSpan(), design.PolePairs);
