@@ -29,15 +29,12 @@ public static class CheckCommand
 
         if (format == "sarif")
         {
-            using var stream = new MemoryStream();
-            using (var json = DiagnosticJson.CreateWriter(stream))
-                SarifWriter.Write(json, results.Select(r => (r.File.DisplayName, r.Compilation)), typeof(CheckCommand).Assembly.GetName().Version?.ToString(3) ?? "0.0.0");
-            io.Out.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+            string version = typeof(CheckCommand).Assembly.GetName().Version?.ToString(3) ?? "0.0.0";
+            io.Out.WriteLine(DiagnosticJson.ToText(json => SarifWriter.Write(json, results.Select(r => (r.File.DisplayName, r.Compilation)), version)));
         }
         else if (format == "json")
         {
-            using var stream = new MemoryStream();
-            using (var json = DiagnosticJson.CreateWriter(stream))
+            io.Out.WriteLine(DiagnosticJson.ToText(json =>
             {
                 json.WriteStartObject();
                 json.WriteStartArray("diagnostics");
@@ -45,8 +42,7 @@ public static class CheckCommand
                     foreach (var d in c.Diagnostics) DiagnosticJson.WriteOne(json, file.DisplayName, c.Source, d);
                 json.WriteEndArray();
                 json.WriteEndObject();
-            }
-            io.Out.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+            }));
         }
         else
         {

@@ -50,6 +50,14 @@ public static class DiagnosticJson
         json.WriteEndObject();
     }
 
+    /// <summary>Runs <paramref name="write"/> on an indented writer and returns the JSON text.</summary>
+    public static string ToText(Action<Utf8JsonWriter> write)
+    {
+        using var stream = new MemoryStream();
+        using (var json = CreateWriter(stream)) write(json);
+        return System.Text.Encoding.UTF8.GetString(stream.ToArray());
+    }
+
     public static Utf8JsonWriter CreateWriter(Stream stream) =>
         new(stream, new JsonWriterOptions { Indented = true, Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
 }

@@ -9,12 +9,7 @@ namespace WindScript.Cli.Output;
 /// </summary>
 public static class DiffJson
 {
-    public static void Write(TextWriter output, WindingDiff d)
-    {
-        using var stream = new MemoryStream();
-        using (var json = DiagnosticJson.CreateWriter(stream)) Write(json, d);
-        output.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
-    }
+    public static void Write(TextWriter output, WindingDiff d) => output.WriteLine(DiagnosticJson.ToText(json => Write(json, d)));
 
     public static void Write(Utf8JsonWriter json, WindingDiff d)
     {

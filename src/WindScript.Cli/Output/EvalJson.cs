@@ -34,12 +34,8 @@ public static class EvalJson
         return document.ToJsonString(new JsonSerializerOptions(EvalJsonContext.Default.Options) { WriteIndented = true });
     }
 
-    private static string DiagnosticsArray(string file, SourceText source, IEnumerable<Diagnostic> diagnostics)
-    {
-        using var stream = new MemoryStream();
-        using (var json = DiagnosticJson.CreateWriter(stream)) DiagnosticJson.WriteArray(json, file, source, diagnostics);
-        return System.Text.Encoding.UTF8.GetString(stream.ToArray());
-    }
+    private static string DiagnosticsArray(string file, SourceText source, IEnumerable<Diagnostic> diagnostics) =>
+        DiagnosticJson.ToText(json => DiagnosticJson.WriteArray(json, file, source, diagnostics));
 }
 
 /// <summary>Wave kinds as lower-case strings ("forward", "backward", "pulsating", "elliptic", "standing").</summary>

@@ -1,5 +1,6 @@
 using System.Globalization;
 using WindScript.Model;
+using WindScript.Text;
 
 namespace WindScript.Cli.Output;
 
@@ -16,7 +17,7 @@ public static class EvalText
         o.WriteLine($"  phases m           {d.Phases.Length} ({string.Join(" ", d.Phases.Select(p => p.Name))})");
         o.WriteLine($"  phase shift        {d.PhaseShiftDegrees.ToString("0.###", Inv)} deg electrical");
         double q = (double)d.Slots / (d.Poles * d.Phases.Length);
-        o.WriteLine($"  slots/pole/phase q {Fraction(d.Slots, d.Poles * d.Phases.Length)}{(q % 1 == 0 ? "" : $" = {q.ToString("0.####", Inv)}")}");
+        o.WriteLine($"  slots/pole/phase q {FractionText.Of(d.Slots, d.Poles * d.Phases.Length)}{(q % 1 == 0 ? "" : $" = {q.ToString("0.####", Inv)}")}");
         WriteGeometry(o, d.Geometry, d.Slots);
         o.WriteLine();
         var w = d.Winding;
@@ -25,7 +26,7 @@ public static class EvalText
         o.WriteLine($"  coils              {w.Coils.Length}");
         o.WriteLine($"  parallel paths     {w.Paths}");
         var pitches = w.Coils.Select(c => c.PitchSlots(d.Slots)).Distinct().Order().ToArray();
-        if (pitches.Length > 0) o.WriteLine($"  coil pitch         {string.Join(", ", pitches)} slot{(pitches.Length == 1 && pitches[0] == 1 ? "" : "s")} (pole pitch {Fraction(d.Slots, d.Poles)} slots)");
+        if (pitches.Length > 0) o.WriteLine($"  coil pitch         {string.Join(", ", pitches)} slot{(pitches.Length == 1 && pitches[0] == 1 ? "" : "s")} (pole pitch {FractionText.Of(d.Slots, d.Poles)} slots)");
         o.WriteLine();
         o.WriteLine("  phase  coils  turns  series turns");
         for (int p = 0; p < d.Phases.Length; p++)
@@ -82,11 +83,5 @@ public static class EvalText
                 o.WriteLine();
             }
         }
-    }
-
-    private static string Fraction(int num, int den)
-    {
-        long g = WindingDesign.Gcd(num, den);
-        return den / g == 1 ? (num / g).ToString(Inv) : $"{num / g}/{den / g}";
     }
 }

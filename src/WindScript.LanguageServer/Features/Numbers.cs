@@ -17,12 +17,5 @@ public static class Numbers
     public static string Degrees(double radians) => Show(radians * 180 / Math.PI, 2) + "°";
 
     /// <summary>A ratio as a reduced fraction ("7/9"), or a whole number.</summary>
-    public static string Fraction(long numerator, long denominator)
-    {
-        long g = Model.WindingDesign.Gcd(numerator, denominator);
-        if (g == 0) return "0";
-        long n = numerator / g, d = denominator / g;
-        if (d < 0) (n, d) = (-n, -d);
-        return d == 1 ? n.ToString(Inv) : $"{n}/{d}";
-    }
+    public static string Fraction(long numerator, long denominator) => Text.FractionText.Of(numerator, denominator);
 }
