@@ -20,7 +20,4 @@ public sealed record Coil(
 {
     /// <summary>The coil span in slot pitches, measured forward from go to return (1..Q-1), or 0.</summary>
     public int PitchSlots(int slots) => ((ReturnSlot - GoSlot) % slots + slots) % slots;
-
-    /// <summary>The same coil with its current reversed.</summary>
-    public Coil Reversed() => this with { Polarity = -Polarity };
 }

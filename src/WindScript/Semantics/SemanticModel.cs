@@ -1,4 +1,3 @@
-using WindScript.Model;
 using WindScript.Text;
 
 namespace WindScript.Semantics;
@@ -29,8 +28,4 @@ public sealed class SemanticModel
     public Symbol? SymbolAt(int offset) =>
         SymbolList.FirstOrDefault(s => s.Definition.Contains(offset) || s.Definition.End == offset)
         ?? SymbolList.FirstOrDefault(s => s.References.Any(r => r.Contains(offset) || r.End == offset));
-
-    /// <summary>The coils produced by the statement at an offset (a loop or pattern produces several).</summary>
-    public IReadOnlyList<Coil> CoilsAt(WindingDesign design, int offset) =>
-        design.Winding.Coils.Where(c => c.Span.Contains(offset)).ToArray();
 }

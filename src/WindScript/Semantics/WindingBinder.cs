@@ -222,10 +222,8 @@ internal sealed class WindingBinder(
             return;
         }
         if (phase is null || go is null || ret is null || turns is null) return;
-        _coils.Add(new Coil(phase.Value, go.Value, ret.Value, goLayer, returnLayer, turns.Value, coil.Reversed ? -1 : 1, CurrentGroup(settings), coil.Span));
+        _coils.Add(new Coil(phase.Value, go.Value, ret.Value, goLayer, returnLayer, turns.Value, coil.Reversed ? -1 : 1, settings.Name, coil.Span));
     }
-
-    private static string CurrentGroup(GroupSettings settings) => settings.Name;
 
     private int? BindSlot(ExpressionSyntax expression, Scope scope)
     {
