@@ -16,11 +16,8 @@ internal static class HarmonicContentChecks
         var spectrum = MachineAnalysis.BalancedWaves(d, c.Spectrum, 2 * d.Slots);
         if (spectrum.WorkingWave <= 0) return;
         var at = PhaseBalanceChecks.WindingKeyword(c);
-        double Relative(int order)
-        {
-            var wave = spectrum.Waves.First(w => w.Order == order);
-            return Math.Max(wave.Forward, wave.Backward);
-        }
+        var waves = spectrum.Waves.ToDictionary(w => w.Order);
+        double Relative(int order) => Math.Max(waves[order].Forward, waves[order].Backward);
 
         var subs = spectrum.SubHarmonics;
         if (subs.Length > 0)
