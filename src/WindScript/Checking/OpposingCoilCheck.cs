@@ -7,6 +7,9 @@ namespace WindScript.Checking;
 /// <summary>A coil whose fundamental EMF phasor points away from its phase's total: almost always reversed by mistake.</summary>
 internal static class OpposingCoilCheck
 {
+    /// <summary>Each offered fix costs one re-check of the file; beyond this many, none is offered.</summary>
+    private const int MaxVerifiedFixes = 8;
+
     public static void Run(CheckContext c)
     {
         var d = c.Design;
@@ -14,13 +17,14 @@ internal static class OpposingCoilCheck
         // e^(−jpθ) of every slot centre, once: a coil's phasor is then two look-ups.
         var unit = new Complex[d.Slots];
         for (int s = 0; s < d.Slots; s++) unit[s] = Complex.FromPolarCoordinates(1, -p * SlotSpectrum.SlotAngle(s, d.Slots));
+        int verified = 0;
         for (int k = 0; k < c.PhaseCount; k++)
         {
             var total = SlotSpectrum.Direct(c.Spectrum.SlotConductors[k], p);
             if (total.Magnitude < 1e-9) continue;
             foreach (var coil in d.Winding.Coils)
             {
-                if (coil.Phase != k) continue;
+                if (coil.Phase != k || c.Culprits.Contains(coil)) continue;
                 var phasor = coil.Turns * coil.Polarity * (unit[coil.GoSlot - 1] - unit[coil.ReturnSlot - 1]);
                 // Only coils that link the fundamental at all have a direction to judge.
                 if (phasor.Magnitude < 1e-6 * coil.Turns) continue;
@@ -28,7 +32,14 @@ internal static class OpposingCoilCheck
                 if (cos >= -1e-9) continue;
                 var diagnostic = DiagnosticCatalog.OpposingCoil.At(coil.Span,
                     $"this coil of phase {c.PhaseName(k)} ({coil.GoSlot} -> {coil.ReturnSlot}) subtracts from the phase's EMF: it points {Math.Acos(Math.Clamp(cos, -1, 1)) * 180 / Math.PI:0} deg electrical away from the phase's total");
-                if (c.Syntax is not null && SourceEdits.FlipPolarity(c.Syntax, coil.Span) is { } fix) diagnostic = diagnostic with { Fix = fix };
+                // Offered only if reversing it leaves no error and no such warning on this coil.
+                if (c.Syntax is { } tree && verified < MaxVerifiedFixes && !FixVerifier.Verifying && SourceEdits.FlipPolarity(tree, coil.Span) is { } fix)
+                {
+                    verified++;
+                    int start = coil.Span.Start;
+                    if (FixVerifier.Repairs(c, tree, fix.Edits, x => x.Code == DiagnosticCatalog.OpposingCoil.Code && x.Span.Start == start))
+                        diagnostic = diagnostic with { Fix = fix };
+                }
                 c.Diagnostics.Add(diagnostic);
             }
         }

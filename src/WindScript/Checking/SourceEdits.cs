@@ -20,9 +20,7 @@ internal static class SourceEdits
         var text = tree.Source.Text;
         if (Find<CoilSyntax>(tree.Root.Statements, coilSpan) is { } coil)
         {
-            var edit = coil.Reversed
-                ? new TextEdit(TextSpan.FromBounds(coil.Phase.Span.Start - 1, coil.Phase.Span.Start), "")
-                : new TextEdit(new TextSpan(coil.Phase.Span.Start, 0), "-");
+            var edit = new TextEdit(RepairEdits.SignedNameSpan(tree, coil.Phase.Span, coil.Reversed), (coil.Reversed ? "" : "-") + coil.Phase.Text);
             return new CodeFix($"Reverse the coil (write {(coil.Reversed ? "" : "-")}{coil.Phase.Text})", [edit]);
         }
         // A pattern entry such as "-U" or "U". A single-layer coil spans two entries: no local fix.
@@ -40,6 +38,32 @@ internal static class SourceEdits
     public static TextSpan? PropertySpan(SyntaxTree? tree, TextSpan blockSpan, string keyword) =>
         tree?.Root.Statements.OfType<BlockSyntax>().FirstOrDefault(b => b.Span == blockSpan)?.Body
             .OfType<PropertySyntax>().FirstOrDefault(p => p.Keyword.Text == keyword)?.Span;
+
+    /// <summary>The 'coil' statement written at <paramref name="span"/>, if any.</summary>
+    public static CoilSyntax? FindCoil(SyntaxTree tree, TextSpan span) => Find<CoilSyntax>(tree.Root.Statements, span);
+
+    /// <summary>The slot-pattern entry written at <paramref name="span"/>, if any.</summary>
+    public static PatternEntrySyntax? FindEntry(SyntaxTree tree, TextSpan span) =>
+        Patterns(tree.Root.Statements).SelectMany(p => p.Entries).FirstOrDefault(e => e.Span == span);
+
+    /// <summary>The two entries a single-layer pattern coil spans: its go entry starts the span and its return entry ends it.</summary>
+    public static (PatternEntrySyntax Go, PatternEntrySyntax Return)? FindEntryPair(SyntaxTree tree, TextSpan span)
+    {
+        var entries = Patterns(tree.Root.Statements).SelectMany(p => p.Entries).ToArray();
+        var go = entries.FirstOrDefault(e => e.Span.Start == span.Start);
+        var ret = entries.FirstOrDefault(e => e.Span.End == span.End);
+        return go is null || ret is null || ReferenceEquals(go, ret) ? null : (go, ret);
+    }
+
+    private static IEnumerable<PatternSyntax> Patterns(IEnumerable<StatementSyntax> statements)
+    {
+        foreach (var s in statements)
+        {
+            if (s is PatternSyntax p) yield return p;
+            var body = s switch { BlockSyntax b => b.Body, ForSyntax f => f.Body, _ => null };
+            if (body is not null) foreach (var inner in Patterns(body)) yield return inner;
+        }
+    }
 
     private static T? Find<T>(IEnumerable<StatementSyntax> statements, TextSpan span) where T : StatementSyntax
     {

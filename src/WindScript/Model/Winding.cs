@@ -32,4 +32,5 @@ public sealed record Winding
     public TextSpan SeriesTurnsSpan { get; init; }
     public TextSpan ConductorsPerSlotSpan { get; init; }
     public TextSpan LayersSpan { get; init; }
+    public TextSpan PitchSpan { get; init; }
 }
