@@ -195,5 +195,5 @@ internal static class PhaseBalanceChecks
         return d.ToString("0.##", CultureInfo.InvariantCulture) + " deg";
     }
 
-    internal static TextSpan WindingKeyword(CheckContext c) => c.Design.Winding.Span with { Length = Math.Min(7, c.Design.Winding.Span.Length) };
+    internal static TextSpan WindingKeyword(CheckContext c) => c.Design.Winding.KeywordSpan;
 }

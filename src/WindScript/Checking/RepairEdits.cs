@@ -7,7 +7,7 @@ namespace WindScript.Checking;
 
 /// <summary>
 /// The source edits that make a <see cref="Repair"/>: the phase name and its '-' of a coil line
-/// or pattern entry, or a coil's turns, found from the syntax tree and its tokens. An edit is
+/// or pattern entry, or a coil's turns, found from the syntax tree's tokens (the '-' a coil or entry keeps). An edit is
 /// only a proposal: <see cref="FixVerifier"/> re-checks the edited text before it is offered.
 /// </summary>
 internal static class RepairEdits
@@ -30,7 +30,8 @@ internal static class RepairEdits
                 }
                 // The model's polarity is the written one (a '-' reverses); keep that relation.
                 int newWritten = change.NewPolarity * coil.Polarity * (statement.Reversed ? -1 : 1);
-                edits.Add(new TextEdit(SignedNameSpan(tree, statement.Phase.Span, statement.Reversed), Signed(newWritten, phaseName(change.NewPhase))));
+                var from = statement.Minus is { } minus ? minus.Span.Start : statement.Phase.Span.Start;
+                edits.Add(new TextEdit(TextSpan.FromBounds(from, statement.Phase.Span.End), Signed(newWritten, phaseName(change.NewPhase))));
             }
             else if (change.NewTurns != coil.Turns)
             {
@@ -53,14 +54,6 @@ internal static class RepairEdits
             }
         }
         return edits;
-    }
-
-    /// <summary>The span of a phase name with its '-' token, if the source wrote one.</summary>
-    public static TextSpan SignedNameSpan(SyntaxTree tree, TextSpan name, bool reversed)
-    {
-        if (!reversed) return name;
-        int index = Array.FindIndex(tree.Tokens, t => t.Span.Start == name.Start);
-        return index > 0 && tree.Tokens[index - 1].Kind == TokenKind.Minus ? TextSpan.FromBounds(tree.Tokens[index - 1].Span.Start, name.End) : name;
     }
 
     private static string Signed(int sign, string name) => (sign < 0 ? "-" : "") + name;

@@ -14,22 +14,30 @@ internal static class SourceEdits
         return property is null ? null : new CodeFix(title, [new TextEdit(property.Value.Span, newValue)]);
     }
 
-    /// <summary>Reverses the coil written at <paramref name="coilSpan"/>: a 'coil' statement or a slot-pattern entry.</summary>
+    /// <summary>
+    /// Reverses the coil written at <paramref name="coilSpan"/>: a 'coil' statement or a
+    /// slot-pattern entry. The edit comes from the tokens: the sign token is removed (with the
+    /// space between it and the phase) or a '-' is written before the phase, however the line is spaced.
+    /// </summary>
     public static CodeFix? FlipPolarity(SyntaxTree tree, TextSpan coilSpan)
     {
-        var text = tree.Source.Text;
         if (Find<CoilSyntax>(tree.Root.Statements, coilSpan) is { } coil)
         {
-            var edit = new TextEdit(RepairEdits.SignedNameSpan(tree, coil.Phase.Span, coil.Reversed), (coil.Reversed ? "" : "-") + coil.Phase.Text);
+            var edit = coil.Minus is { } minus
+                ? new TextEdit(TextSpan.FromBounds(minus.Span.Start, coil.Phase.Span.Start), "")
+                : new TextEdit(new TextSpan(coil.Phase.Span.Start, 0), "-");
             return new CodeFix($"Reverse the coil (write {(coil.Reversed ? "" : "-")}{coil.Phase.Text})", [edit]);
         }
         // A pattern entry such as "-U" or "U". A single-layer coil spans two entries: no local fix.
-        if (coilSpan.Length > 0 && coilSpan.End <= text.Length && !text.AsSpan(coilSpan.Start, coilSpan.Length).ContainsAny(' ', '\t'))
+        if (FindEntry(tree.Root.Statements, coilSpan) is { Phase: { } phase } entry)
         {
-            int start = coilSpan.Start;
-            char first = text[start];
-            if (first is '-' or '+') return new CodeFix("Reverse the coil", [new TextEdit(new TextSpan(start, 1), first == '-' ? "" : "-")]);
-            if (Lexer.IsWordStart(first)) return new CodeFix("Reverse the coil", [new TextEdit(new TextSpan(start, 0), "-")]);
+            var edit = entry.Sign switch
+            {
+                { Kind: TokenKind.Minus } sign => new TextEdit(TextSpan.FromBounds(sign.Span.Start, phase.Span.Start), ""),
+                { } plus => new TextEdit(plus.Span, "-"),
+                null => new TextEdit(new TextSpan(phase.Span.Start, 0), "-"),
+            };
+            return new CodeFix("Reverse the coil", [edit]);
         }
         return null;
     }
@@ -43,8 +51,7 @@ internal static class SourceEdits
     public static CoilSyntax? FindCoil(SyntaxTree tree, TextSpan span) => Find<CoilSyntax>(tree.Root.Statements, span);
 
     /// <summary>The slot-pattern entry written at <paramref name="span"/>, if any.</summary>
-    public static PatternEntrySyntax? FindEntry(SyntaxTree tree, TextSpan span) =>
-        Patterns(tree.Root.Statements).SelectMany(p => p.Entries).FirstOrDefault(e => e.Span == span);
+    public static PatternEntrySyntax? FindEntry(SyntaxTree tree, TextSpan span) => FindEntry(tree.Root.Statements, span);
 
     /// <summary>The two entries a single-layer pattern coil spans: its go entry starts the span and its return entry ends it.</summary>
     public static (PatternEntrySyntax Go, PatternEntrySyntax Return)? FindEntryPair(SyntaxTree tree, TextSpan span)
@@ -63,6 +70,18 @@ internal static class SourceEdits
             var body = s switch { BlockSyntax b => b.Body, ForSyntax f => f.Body, _ => null };
             if (body is not null) foreach (var inner in Patterns(body)) yield return inner;
         }
+    }
+
+    private static PatternEntrySyntax? FindEntry(IEnumerable<StatementSyntax> statements, TextSpan span)
+    {
+        foreach (var s in statements)
+        {
+            if (!s.Span.Contains(span)) continue;
+            if (s is PatternSyntax pattern) return pattern.Entries.FirstOrDefault(e => e.Span == span);
+            var body = s switch { BlockSyntax b => b.Body, ForSyntax f => f.Body, _ => null };
+            if (body is not null && FindEntry(body, span) is { } inner) return inner;
+        }
+        return null;
     }
 
     private static T? Find<T>(IEnumerable<StatementSyntax> statements, TextSpan span) where T : StatementSyntax
