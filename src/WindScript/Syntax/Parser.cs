@@ -14,7 +14,7 @@ namespace WindScript.Syntax;
 /// line (skipping a whole braced body if the bad line opened one), so every independent
 /// mistake in a file is reported once and nothing cascades.
 /// </summary>
-public static class Parser
+internal static class Parser
 {
     // The token array of the parse in progress: error recovery needs it to place messages.
     [ThreadStatic] private static Token[]? _tokens;
