@@ -30,6 +30,9 @@ public sealed record Winding
     /// <summary>Where the winding block is in the source.</summary>
     public TextSpan Span { get; init; }
 
+    /// <summary>The span of the block's <c>winding</c> keyword, where whole-winding diagnostics point.</summary>
+    public TextSpan KeywordSpan { get; init; }
+
     /// <summary>Spans of the declarations of paths, series turns and conductors (for diagnostics and fixes).</summary>
     public TextSpan PathsSpan { get; init; }
     /// <summary>Where <c>series_turns</c> is written (empty if it is not).</summary>

@@ -42,6 +42,9 @@ public sealed record WindingDesign
 
     /// <summary>Where the machine block is in the source.</summary>
     public TextSpan MachineSpan { get; init; }
+
+    /// <summary>The span of the <c>machine</c> keyword, where whole-machine diagnostics point.</summary>
+    public TextSpan MachineKeywordSpan { get; init; }
     /// <summary>Where <c>slots</c> is written.</summary>
     public TextSpan SlotsSpan { get; init; }
     /// <summary>Where <c>poles</c> is written.</summary>
