@@ -11,7 +11,7 @@ namespace WindScript.Checking;
 /// dropped or doubled coil would otherwise make every later figure look wrong too); warnings
 /// never stop a stage.
 /// </summary>
-public static class Checker
+internal static class Checker
 {
     public static IReadOnlyList<Diagnostic> Check(WindingDesign design, SyntaxTree? syntax = null, bool sourceHasErrors = false)
     {
