@@ -9,7 +9,7 @@ namespace WindScript.Analysis;
 /// This ignores the tangential field and so holds only for waves long against the gap; the exact
 /// 2-D solution per harmonic is <see cref="AnnularGapField"/>.
 /// </summary>
-public static class AirGapField
+internal static class AirGapField
 {
     /// <summary>Permeability of vacuum, 4π·10⁻⁷ H/m (the SI 2019 value differs in the 10th digit).</summary>
     public const double Mu0 = 4e-7 * Math.PI;

@@ -33,6 +33,7 @@ public sealed record Geometry
     /// <summary>Peak of the fundamental air-gap flux density (tesla), for back-EMF.</summary>
     public double? GapFluxDensity { get; init; }
 
+    /// <summary>Bore radius (m), half the bore diameter; null without a bore.</summary>
     public double? BoreRadius => BoreDiameter / 2;
 
     /// <summary>The radius of the rotor's gap surface actually used: given, or bore radius minus (inner rotor) or plus (outer rotor) the gap.</summary>
