@@ -15,7 +15,7 @@ namespace WindScript.Analysis;
 /// the same annulus solution is the armature-reaction field of Z. Q. Zhu, D. Howe, IEEE Trans.
 /// Magn. 29(1), 1993 — from memory.) Smooth surfaces: slotting is not in the 2-D solution.
 /// </summary>
-public static class AnnularGapField
+internal static class AnnularGapField
 {
     /// <summary>cosh(νρ)/sinh(νλ) for |ρ| ≤ λ, without overflow at high orders.</summary>
     private static double CoshOverSinh(double order, double rho, double lambda)

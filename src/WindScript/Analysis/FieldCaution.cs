@@ -6,7 +6,7 @@ namespace WindScript.Analysis;
 /// above <see cref="IronLimit"/> is a figure no machine can carry; eval, the report and hover say so
 /// beside it, in these words.
 /// </summary>
-public static class FieldCaution
+internal static class FieldCaution
 {
     /// <summary>Flux density (T) above which a gap figure is flagged: about where electrical steel saturates.</summary>
     public const double IronLimit = 2.0;

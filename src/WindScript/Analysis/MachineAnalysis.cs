@@ -153,7 +153,7 @@ public static class MachineAnalysis
     }
 
     /// <summary>Σ_k conductors_k(s)/paths · i_k: the ampere-conductors in each slot at the instant.</summary>
-    public static double[] SlotAmpereConductors(WindingSpectrum winding, ReadOnlySpan<double> currents)
+    internal static double[] SlotAmpereConductors(WindingSpectrum winding, ReadOnlySpan<double> currents)
     {
         var total = new double[winding.Slots];
         for (int k = 0; k < winding.Phases && k < currents.Length; k++)

@@ -15,7 +15,7 @@ namespace WindScript.Analysis;
 /// conductors; <see cref="PeakAtStatorTeeth"/> reads it at the tooth centres, midway between slots,
 /// where the staircase is flat.
 /// </summary>
-public sealed class StaircaseGapField
+internal sealed class StaircaseGapField
 {
     private readonly double[] _ampereConductors;
     private readonly Complex[] _slotSums;     // S(ν) for ν = 0..Q−1; S(ν + Q) = −S(ν)
