@@ -13,6 +13,9 @@ namespace WindScript.Cli.Commands;
 /// </summary>
 public static class SweepCommand
 {
+    /// <summary>More workers than this only costs memory and start-up on any machine we know.</summary>
+    public const int MaxThreads = 256;
+
     public static Command Create(CliIO io)
     {
         var slots = new Option<string>("--slots", "-Q") { Description = "Slot counts: A..B or one number", Required = true };
@@ -28,6 +31,10 @@ public static class SweepCommand
         var format = CommonOptions.Format("jsonl", "jsonl", "csv");
         var shard = new Option<string?>("--shard") { Description = "Write only part K of N (K/N); the parts concatenated in order are the whole output" };
         var threads = new Option<int>("--threads") { Description = "Worker threads (default: one per core)", DefaultValueFactory = _ => Environment.ProcessorCount };
+        UsageMessages.InRange(phases, 2, InputLimits.MaxPhases);
+        UsageMessages.InRange(layers, 1, 2);
+        UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
+        UsageMessages.InRange(threads, 1, MaxThreads);
         var command = new Command("sweep", "Synthesise and evaluate every feasible slot/pole combination in the ranges, one record per layout")
         {
             slots, poles, phases, layers, pitch, orders, format, shard, threads,
@@ -40,12 +47,18 @@ public static class SweepCommand
     public static int Run(CliIO io, string slots, string poles, int phases, int layers, string pitch, int orders, string format, string? shardText, int threads)
     {
         string? error = null;
-        var slotRange = ParseRange(slots, "--slots", ref error);
-        var poleRange = ParseRange(poles, "--poles", ref error);
+        var slotRange = ParseRange(slots, "--slots", 2, InputLimits.MaxSlots, ref error);
+        var poleRange = ParseRange(poles, "--poles", 2, InputLimits.MaxPoles, ref error);
+        if (error is null && poleRange.From == poleRange.To && poleRange.From % 2 != 0) error = $"--poles: the pole count must be even, not {poleRange.From}";
         var rule = error is null ? PitchRule.Parse(pitch, out error) : null;
+        if (error is not null && rule is null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--pitch: " + error;
         var shard = SweepShard.Whole;
-        if (error is null && shardText is not null) shard = SweepShard.Parse(shardText, out error) ?? shard;
-        if (error is null && threads < 1) error = $"--threads must be at least 1, not {threads}";
+        if (error is null && shardText is not null)
+        {
+            shard = SweepShard.Parse(shardText, out error) ?? shard;
+            if (error is not null) error = "--shard: " + error;
+        }
+        if (error is null && threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {threads}";
         SweepSpec? spec = null;
         if (error is null)
         {
@@ -84,14 +97,18 @@ public static class SweepCommand
         return ExitCodes.Ok;
     }
 
-    private static (int From, int To) ParseRange(string text, string option, ref string? error)
+    private static (int From, int To) ParseRange(string text, string option, int min, int max, ref string? error)
     {
         if (error is not null) return (0, 0);
         var parts = text.Split("..");
         if (parts.Length is 1 or 2
             && int.TryParse(parts[0], NumberStyles.None, CultureInfo.InvariantCulture, out int from)
             && int.TryParse(parts[^1], NumberStyles.None, CultureInfo.InvariantCulture, out int to))
+        {
+            if (from < min || to > max) error = $"{option} must lie within {min}..{max}, not {text}";
+            else if (to < from) error = $"{option}: the range {text} is empty";
             return (from, to);
+        }
         error = $"{option} takes a range A..B or one whole number, not '{text}'";
         return (0, 0);
     }
