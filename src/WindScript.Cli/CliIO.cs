@@ -12,6 +12,9 @@ public sealed record CliIO(TextReader In, TextWriter Out, TextWriter Err, bool E
     /// </summary>
     public Stream? RawOut { get; init; }
 
+    /// <summary>Looks an environment variable up (null when unset); tests pass a dictionary, so none of the process's variables leak in.</summary>
+    public Func<string, string?> Environment { get; init; } = _ => null;
+
     /// <summary>
     /// The process's streams. Standard output is written through a plain file stream on
     /// descriptor 1 rather than the console stream, because the console stream silently drops
@@ -24,7 +27,11 @@ public sealed record CliIO(TextReader In, TextWriter Out, TextWriter Err, bool E
         {
             var raw = StandardOutput();
             var output = new StreamWriter(raw, new UTF8Encoding(false), 1 << 14, leaveOpen: true) { AutoFlush = false };
-            return new CliIO(System.Console.In, output, System.Console.Error, !System.Console.IsErrorRedirected) { RawOut = raw };
+            return new CliIO(System.Console.In, output, System.Console.Error, !System.Console.IsErrorRedirected)
+            {
+                RawOut = raw,
+                Environment = System.Environment.GetEnvironmentVariable,
+            };
         }
     }
 

@@ -9,12 +9,17 @@ namespace WindScript.Cli.Commands;
 /// <summary>
 /// <c>windscript sweep --slots A..B --poles C..D ...</c>: synthesise every feasible combination in
 /// the ranges and stream one record per layout (JSON Lines or CSV) in a fixed order, on every
-/// core, with bounded memory; <c>--shard K/N</c> writes the K-th of N contiguous parts.
+/// core, with bounded memory; <c>--shard K/N</c> (or <c>auto</c>, from a batch scheduler's
+/// environment) writes the K-th of N contiguous parts, to standard output or atomically to a file.
 /// </summary>
 public static class SweepCommand
 {
     /// <summary>More workers than this only costs memory and start-up on any machine we know.</summary>
     public const int MaxThreads = 256;
+
+    /// <summary>The command line as given, before it is checked.</summary>
+    public sealed record Arguments(string Slots, string Poles, int Phases, int Layers, string Pitch, int Orders, string Format,
+        string? Shard, int? Shards, string? Output, bool SkipExisting, int Threads);
 
     public static Command Create(CliIO io)
     {
@@ -29,43 +34,55 @@ public static class SweepCommand
         };
         var orders = new Option<int>("--orders", "-N") { Description = "Winding factors at electrical orders 1..N", DefaultValueFactory = _ => 49 };
         var format = CommonOptions.Format("jsonl", "jsonl", "csv");
-        var shard = new Option<string?>("--shard") { Description = "Write only part K of N (K/N); the parts concatenated in order are the whole output" };
+        var shard = new Option<string?>("--shard")
+        {
+            Description = "Write only part K of N (K/N); the parts concatenated in order are the whole output. "
+                + "'auto' reads K and N from the batch scheduler: " + SchedulerShard.Variables,
+        };
+        var shards = new Option<int?>("--shards")
+        {
+            Description = "N for --shard auto where the scheduler does not give it (Kubernetes: the Job's completions; AWS Batch: the array size; Slurm: the array is numbered 1..N)",
+        };
+        var output = new Option<string?>("--output", "-o")
+        {
+            Description = "Write to this file instead of standard output, atomically (temporary file, then rename); {K} and {N} in the name stand for the shard",
+        };
+        var skipExisting = new Option<bool>("--skip-existing") { Description = "With --output: do nothing if the part's file exists (parts are written whole), so rerunning every task fills in only the missing parts" };
         var threads = new Option<int>("--threads") { Description = "Worker threads (default: one per core)", DefaultValueFactory = _ => Environment.ProcessorCount };
         UsageMessages.InRange(phases, 2, InputLimits.MaxPhases);
         UsageMessages.InRange(layers, 1, 2);
         UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
         UsageMessages.InRange(threads, 1, MaxThreads);
+        UsageMessages.InRange(shards, 1, 1_000_000);
         var command = new Command("sweep", "Synthesise and evaluate every feasible slot/pole combination in the ranges, one record per layout")
         {
-            slots, poles, phases, layers, pitch, orders, format, shard, threads,
+            slots, poles, phases, layers, pitch, orders, format, shard, shards, output, skipExisting, threads,
         };
-        command.SetAction(parse => Run(io, parse.GetValue(slots)!, parse.GetValue(poles)!, parse.GetValue(phases), parse.GetValue(layers),
-            parse.GetValue(pitch)!, parse.GetValue(orders), parse.GetValue(format)!, parse.GetValue(shard), parse.GetValue(threads)));
+        command.SetAction(parse => Run(io, new Arguments(parse.GetValue(slots)!, parse.GetValue(poles)!, parse.GetValue(phases), parse.GetValue(layers),
+            parse.GetValue(pitch)!, parse.GetValue(orders), parse.GetValue(format)!, parse.GetValue(shard), parse.GetValue(shards),
+            parse.GetValue(output), parse.GetValue(skipExisting), parse.GetValue(threads))));
         return command;
     }
 
-    public static int Run(CliIO io, string slots, string poles, int phases, int layers, string pitch, int orders, string format, string? shardText, int threads)
+    public static int Run(CliIO io, Arguments a)
     {
         string? error = null;
-        var slotRange = ParseRange(slots, "--slots", 2, InputLimits.MaxSlots, ref error);
-        var poleRange = ParseRange(poles, "--poles", 2, InputLimits.MaxPoles, ref error);
+        var slotRange = ParseRange(a.Slots, "--slots", 2, InputLimits.MaxSlots, ref error);
+        var poleRange = ParseRange(a.Poles, "--poles", 2, InputLimits.MaxPoles, ref error);
         if (error is null && poleRange.From == poleRange.To && poleRange.From % 2 != 0) error = $"--poles: the pole count must be even, not {poleRange.From}";
-        var rule = error is null ? PitchRule.Parse(pitch, out error) : null;
+        var rule = error is null ? PitchRule.Parse(a.Pitch, out error) : null;
         if (error is not null && rule is null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--pitch: " + error;
-        var shard = SweepShard.Whole;
-        if (error is null && shardText is not null)
-        {
-            shard = SweepShard.Parse(shardText, out error) ?? shard;
-            if (error is not null) error = "--shard: " + error;
-        }
-        if (error is null && threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {threads}";
+        var (shard, shardSource) = error is null ? ResolveShard(io, a, ref error) : (SweepShard.Whole, null);
+        if (error is not null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--shard: " + error;
+        if (error is null && a.Threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {a.Threads}";
+        if (error is null && a.SkipExisting && a.Output is null) error = "--skip-existing needs --output FILE";
         SweepSpec? spec = null;
         if (error is null)
         {
             spec = new SweepSpec
             {
                 SlotsFrom = slotRange.From, SlotsTo = slotRange.To, PolesFrom = poleRange.From, PolesTo = poleRange.To,
-                Phases = phases, Layers = layers, Pitch = rule!, Orders = orders,
+                Phases = a.Phases, Layers = a.Layers, Pitch = rule!, Orders = a.Orders,
             };
             error = spec.Problem();
         }
@@ -75,13 +92,38 @@ public static class SweepCommand
             return ExitCodes.Usage;
         }
 
+        if (shardSource is not null && io.ErrIsTerminal) io.Err.WriteLine($"windscript sweep: shard {shard} from {shardSource}");
+        string? path = a.Output is null ? null : PartFile.Expand(a.Output, shard.Index, shard.Count);
+        if (path is not null && a.SkipExisting && File.Exists(path))
+        {
+            if (io.ErrIsTerminal) io.Err.WriteLine($"windscript sweep: {path} exists; skipped");
+            return ExitCodes.Ok;
+        }
+
+        PartFile? part;
+        try { part = path is null ? null : new PartFile(path); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            io.Err.WriteLine($"windscript sweep: --output: cannot write '{path}': {IoFailure.Describe(e)}");
+            return ExitCodes.Usage;
+        }
+        using (part)
+        {
+            WriteRecords(io, spec, shard, a, part?.Stream);
+            part?.Commit();
+        }
+        return ExitCodes.Ok;
+    }
+
+    private static void WriteRecords(CliIO io, SweepSpec spec, SweepShard shard, Arguments a, Stream? file)
+    {
         var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
-        var output = new RecordOutput(io);
-        output.Write(SweepFormat.Create(format, orders).Header);
+        var output = new RecordOutput(io, file);
+        output.Write(SweepFormat.Create(a.Format, a.Orders).Header);
         long done = 0;
         OrderedBatches.Run(
-            SweepPlan.Shard(spec, shard), threads, batchSize: 16, window: 8 * threads,
-            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: SweepFormat.Create(format, orders)),
+            SweepPlan.Shard(spec, shard), a.Threads, batchSize: 16, window: 8 * a.Threads,
+            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: SweepFormat.Create(a.Format, a.Orders)),
             (state, candidate, buffer) =>
             {
                 if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, buffer);
@@ -94,7 +136,24 @@ public static class SweepCommand
             });
         output.Flush();
         progress?.Finish();
-        return ExitCodes.Ok;
+    }
+
+    /// <summary>The shard to write and, for <c>--shard auto</c>, the variables it came from.</summary>
+    private static (SweepShard, string?) ResolveShard(CliIO io, Arguments a, ref string? error)
+    {
+        if (a.Shard is null or "")
+        {
+            if (a.Shards is not null) error = "--shards goes with --shard auto";
+            return (SweepShard.Whole, null);
+        }
+        if (a.Shard == "auto")
+        {
+            var found = SchedulerShard.Resolve(io.Environment, a.Shards, out error);
+            return found is { } f ? (f.Shard, f.Source) : (SweepShard.Whole, null);
+        }
+        var shard = SweepShard.Parse(a.Shard, out error) ?? SweepShard.Whole;
+        if (error is null && a.Shards is { } n && n != shard.Count) error = $"--shard {a.Shard} and --shards {n} disagree";
+        return (shard, null);
     }
 
     private static (int From, int To) ParseRange(string text, string option, int min, int max, ref string? error)

@@ -107,7 +107,7 @@ public static class DiffJson
         {
             json.WriteStartObject();
             json.WriteString("name", drive.Name);
-            json.WriteString("change", drive.Kind.ToString().ToLowerInvariant());
+            json.WriteString("change", ChangeName(drive.Kind));
             json.WriteStartArray("details");
             foreach (var r in drive.Details) Text(json, r);
             json.WriteEndArray();
@@ -129,6 +129,15 @@ public static class DiffJson
         json.WriteEndArray();
         json.WriteEndObject();
     }
+
+    // Spelled out: renaming the enum member must not rename a public value.
+    private static string ChangeName(DriveChangeKind kind) => kind switch
+    {
+        DriveChangeKind.Added => "added",
+        DriveChangeKind.Removed => "removed",
+        DriveChangeKind.Changed => "changed",
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+    };
 
     private static void Figures(Utf8JsonWriter json, string name, IEnumerable<FigureRow> rows)
     {

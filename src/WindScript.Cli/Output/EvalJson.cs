@@ -1,7 +1,7 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
-using System.Text.Json.Serialization;
 using WindScript.Analysis;
+using WindScript.Cli.Output.Json;
 using WindScript.Diagnostics;
 using WindScript.Text;
 
@@ -19,7 +19,7 @@ public static class EvalJson
 
     public static string Write(string file, SourceText source, IEnumerable<Diagnostic> diagnostics, AnalysisResult result)
     {
-        var root = JsonSerializer.SerializeToNode(result, EvalJsonContext.Default.AnalysisResult)!.AsObject();
+        var root = JsonSerializer.SerializeToNode(EvalAnalysisJson.From(result), EvalJsonContext.Default.EvalAnalysisJson)!.AsObject();
         var document = new JsonObject
         {
             ["schemaVersion"] = SchemaVersion,
@@ -37,13 +37,3 @@ public static class EvalJson
     private static string DiagnosticsArray(string file, SourceText source, IEnumerable<Diagnostic> diagnostics) =>
         DiagnosticJson.ToText(json => DiagnosticJson.WriteArray(json, file, source, diagnostics));
 }
-
-/// <summary>Wave kinds as lower-case strings ("forward", "backward", "pulsating", "elliptic", "standing").</summary>
-public sealed class WaveKindJsonConverter() : JsonStringEnumConverter<WaveKind>(JsonNamingPolicy.CamelCase);
-
-[JsonSourceGenerationOptions(
-    PropertyNamingPolicy = JsonKnownNamingPolicy.CamelCase,
-    NumberHandling = JsonNumberHandling.AllowNamedFloatingPointLiterals,
-    Converters = [typeof(WaveKindJsonConverter)])]
-[JsonSerializable(typeof(AnalysisResult))]
-internal sealed partial class EvalJsonContext : JsonSerializerContext;

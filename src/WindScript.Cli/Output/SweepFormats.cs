@@ -166,30 +166,33 @@ public sealed class SweepCsv(int orders) : SweepFormat
 }
 
 /// <summary>
-/// Where sweep output goes: straight to the standard output bytes when there is such a stream,
-/// else through the text writer (tests). The records are ASCII, so both give the same text.
+/// Where sweep output goes: a part file when one is given, else straight to the standard output
+/// bytes when there is such a stream, else through the text writer (tests). The records are
+/// ASCII, so all give the same text.
 /// </summary>
 internal sealed class RecordOutput
 {
     private readonly CliIO _io;
+    private readonly Stream? _raw;
     private char[] _scratch = [];
 
-    public RecordOutput(CliIO io)
+    public RecordOutput(CliIO io, Stream? file = null)
     {
         _io = io;
-        if (io.RawOut is not null) io.Out.Flush();   // anything written as text so far goes first
+        _raw = file ?? io.RawOut;
+        if (file is null && io.RawOut is not null) io.Out.Flush();   // anything written as text so far goes first
     }
 
     public void Write(string text)
     {
         if (text.Length == 0) return;
-        if (_io.RawOut is { } raw) raw.Write(Encoding.UTF8.GetBytes(text));
+        if (_raw is { } raw) raw.Write(Encoding.UTF8.GetBytes(text));
         else _io.Out.Write(text);
     }
 
     public void Write(ReadOnlySpan<byte> bytes)
     {
-        if (_io.RawOut is { } raw)
+        if (_raw is { } raw)
         {
             raw.Write(bytes);
             return;
@@ -201,7 +204,7 @@ internal sealed class RecordOutput
 
     public void Flush()
     {
-        if (_io.RawOut is { } raw) raw.Flush();
+        if (_raw is { } raw) raw.Flush();
         else _io.Out.Flush();
     }
 }

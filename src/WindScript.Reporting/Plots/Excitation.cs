@@ -56,25 +56,13 @@ public sealed class Excitation
         };
     }
 
-    public double[] CurrentsAt(double time)
-    {
-        var currents = new double[Design.Phases.Length];
-        foreach (var c in Drive.Currents)
-            if (c.Phase >= 0 && c.Phase < currents.Length) currents[c.Phase] += c.At(time);
-        return currents;
-    }
+    public double[] CurrentsAt(double time) => Drive.CurrentsAt(time, Design.Phases.Length);
 
     /// <summary>The MMF staircase levels (A-turns) at an instant; level i holds from slot centre i to i + 1 (0-based).</summary>
     public double[] MmfLevels(double time) => MmfStaircase.FromCurrents(Spectrum, CurrentsAt(time), time).Levels.ToArray();
 
     /// <summary>The complex amplitude of mechanical order ν at an instant: F_ν(θ) = Re(C·e^(jνθ)).</summary>
-    public Complex Harmonic(double time, int order)
-    {
-        var currents = CurrentsAt(time);
-        Complex sum = Complex.Zero;
-        for (int k = 0; k < Spectrum.Phases && k < currents.Length; k++) sum += Spectrum.TurnsCoefficient(k, order) * currents[k];
-        return sum;
-    }
+    public Complex Harmonic(double time, int order) => MmfStaircase.Harmonic(Spectrum, CurrentsAt(time), order);
 
     /// <summary>The current groups (one per frequency), strongest first.</summary>
     public IReadOnlyList<CurrentPhasors> Groups =>

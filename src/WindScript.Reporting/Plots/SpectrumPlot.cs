@@ -22,7 +22,7 @@ public static class SpectrumPlot
         // Winding factors of each phase (bars of one phase; the others as marks where they differ).
         var factors = new double[d.Phases.Length, maxOrder];
         for (int k = 0; k < d.Phases.Length; k++)
-            for (int order = 1; order <= maxOrder; order++) factors[k, order - 1] = x.Spectrum.WindingFactor(k, order) * ClosedFormFactors.Skew(order, d.Geometry.SkewSlots, d.Slots);
+            for (int order = 1; order <= maxOrder; order++) factors[k, order - 1] = d.WindingFactor(k, order);
         var top = new ChartArea(80, 50, 710, 200, 0.5, maxOrder + 0.5, 0, 1.05);
         top.DrawAxes(s, "electrical order n = ν/p", "winding factor", OrderTicks(maxOrder, p), [0, 0.2, 0.4, 0.6, 0.8, 1.0], Label(p), null);
         double bar = Math.Max(1, top.Width / maxOrder * 0.7);

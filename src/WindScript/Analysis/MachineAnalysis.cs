@@ -49,7 +49,7 @@ public static class MachineAnalysis
         var machine = new MachineSummary(
             design.Name, design.Slots, design.Poles, design.PolePairs,
             [.. design.Phases.Select(p => p.Name)], design.PhaseShiftDegrees,
-            design.Phases.Length == 0 || design.Poles == 0 ? 0 : (double)design.Slots / (design.Poles * design.Phases.Length),
+            design.SlotsPerPolePerPhase,
             symmetry.MachinePeriodicity, symmetry.WindingPeriodicity, symmetry.HalfPeriodReversal,
             symmetry.AdjacentOrders, symmetry.CoggingOrder);
         var summary = new WindingSummary(design.Winding.Name, design.Winding.Layers, design.Winding.Paths,
@@ -63,19 +63,17 @@ public static class MachineAnalysis
     private static ImmutableArray<PhaseAnalysis> Phases(WindingDesign design, WindingSpectrum winding, RegularWinding? regular, int maxOrder)
     {
         var result = ImmutableArray.CreateBuilder<PhaseAnalysis>(design.Phases.Length);
-        var factors = new double[maxOrder];
         double skew = design.Geometry.SkewSlots;
         foreach (var phase in design.Phases)
         {
             int k = phase.Index;
             var conductors = winding.SlotConductors[k];
-            WindingFactors.Compute(conductors, winding.SideTurns(k), 0, factors);
             var harmonics = ImmutableArray.CreateBuilder<PhaseHarmonic>();
             for (int order = 1; order <= maxOrder; order++)
             {
-                if (factors[order - 1] <= Negligible) continue;
+                if (winding.WindingFactor(k, order) <= Negligible) continue;
                 double sk = ClosedFormFactors.Skew(order, skew, design.Slots);
-                harmonics.Add(new PhaseHarmonic(order, ElectricalOrder(order, design.PolePairs), factors[order - 1] * sk, sk,
+                harmonics.Add(new PhaseHarmonic(order, ElectricalOrder(order, design.PolePairs), design.WindingFactor(k, order), sk,
                     regular is null ? null : ClosedFormFactors.Distribution(order, regular.SlotsPerPolePerPhase, design.Slots),
                     regular is null ? null : ClosedFormFactors.Pitch(order, regular.CoilPitch, design.Slots),
                     winding.MmfPerAmpere(k, order)));

@@ -39,10 +39,7 @@ public sealed class MmfStaircase
     /// <summary>The staircase of a drive's currents at <paramref name="time"/> (seconds).</summary>
     public static MmfStaircase At(WindingSpectrum winding, Drive drive, double time)
     {
-        var currents = new double[winding.Phases];
-        foreach (var c in drive.Currents)
-            if (c.Phase >= 0 && c.Phase < currents.Length) currents[c.Phase] += c.At(time);
-        return FromCurrents(winding, currents, time);
+        return FromCurrents(winding, drive.CurrentsAt(time, winding.Phases), time);
     }
 
     /// <summary>The staircase for given instantaneous phase currents (A), in phase order.</summary>
@@ -59,11 +56,15 @@ public sealed class MmfStaircase
         return new MmfStaircase(time, total);
     }
 
-    /// <summary>Amplitude (A-turns) of the order-ν harmonic of the staircase of given instantaneous currents.</summary>
-    public static double HarmonicAmplitude(WindingSpectrum winding, ReadOnlySpan<double> currents, int order)
+    /// <summary>Complex amplitude C of the order-ν harmonic of the staircase of given currents: F_ν(θ) = Re(C·e^(jνθ)).</summary>
+    public static Complex Harmonic(WindingSpectrum winding, ReadOnlySpan<double> currents, int order)
     {
         Complex sum = Complex.Zero;
         for (int k = 0; k < winding.Phases && k < currents.Length; k++) sum += winding.TurnsCoefficient(k, order) * currents[k];
-        return sum.Magnitude;
+        return sum;
     }
+
+    /// <summary>Amplitude (A-turns) of the order-ν harmonic of the staircase of given instantaneous currents.</summary>
+    public static double HarmonicAmplitude(WindingSpectrum winding, ReadOnlySpan<double> currents, int order) =>
+        Harmonic(winding, currents, order).Magnitude;
 }

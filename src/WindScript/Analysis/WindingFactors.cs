@@ -53,18 +53,12 @@ public static class WindingFactors
         Compute(summed, sideTurns, skewSlots, factors);
     }
 
-    /// <summary>Multiplies factors[ν − 1] by the skew factor of order ν (sine recurrence: no trigonometry per order).</summary>
+    /// <summary>Multiplies factors[ν − 1] by the skew factor of order ν (the one formula, <see cref="ClosedFormFactors.Skew"/>).</summary>
     public static void ApplySkew(Span<double> factors, int slots, double skewSlots)
     {
         if (skewSlots == 0) return;
-        double x = Math.PI * skewSlots / slots;          // half the skew angle per unit order
-        double twoCos = 2 * Math.Cos(x);
-        double previous = 0, current = Math.Sin(x);      // sin(0·x), sin(1·x)
         for (int order = 1; order <= factors.Length; order++)
-        {
-            factors[order - 1] *= Math.Abs(current / (order * x));
-            (previous, current) = (current, twoCos * current - previous);
-        }
+            factors[order - 1] *= ClosedFormFactors.Skew(order, skewSlots, slots);
     }
 
     /// <summary>

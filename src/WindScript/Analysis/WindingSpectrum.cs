@@ -1,12 +1,15 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using WindScript.Model;
 
 namespace WindScript.Analysis;
 
 /// <summary>
-/// The slot spectra of every phase of a design, computed once (base band only, see
-/// <see cref="SlotSpectrum"/>) and read at any mechanical order. Conductors are divided by
-/// the parallel paths, so a phase current times the turns function is the phase's MMF.
+/// The slot spectra of every phase of a design (base band only, see <see cref="SlotSpectrum"/>),
+/// read at any mechanical order. Computed once per design instance and shared by the checker,
+/// the analysis, the plots and the report: <see cref="Of"/> remembers it beside the design
+/// without making the design mutable. Conductors are divided by the parallel paths, so a phase
+/// current times the turns function is the phase's MMF.
 /// </summary>
 public sealed class WindingSpectrum
 {
@@ -34,8 +37,18 @@ public sealed class WindingSpectrum
     /// <summary>Layer-summed signed conductors per phase and slot (not divided by paths).</summary>
     public IReadOnlyList<int[]> SlotConductors { get; }
 
-    public static WindingSpectrum Of(WindingDesign design)
+    // Keyed by the design instance: a `with` copy is another design and gets its own spectrum.
+    private static readonly ConditionalWeakTable<WindingDesign, WindingSpectrum> Computed = new();
+
+    /// <summary>Spectra computed on this thread (a counting hook for tests: one per design).</summary>
+    [ThreadStatic] internal static int ComputationsOnThisThread;
+
+    /// <summary>The spectrum of a design, computed on first use and then shared.</summary>
+    public static WindingSpectrum Of(WindingDesign design) => Computed.GetValue(design, Compute);
+
+    private static WindingSpectrum Compute(WindingDesign design)
     {
+        ComputationsOnThisThread++;
         int q = design.Slots, m = design.Phases.Length;
         double paths = Math.Max(1, design.Winding.Paths);
         int band = SlotSpectrum.BaseBandLength(q);
@@ -63,6 +76,12 @@ public sealed class WindingSpectrum
     /// <summary>C_k(ν) = S_k(ν)/(jπν): the phase's turns function is Σ_ν Re(C_k(ν) e^(jνθ)).</summary>
     public Complex TurnsCoefficient(int phase, int order) =>
         order == 0 ? Complex.Zero : SlotSum(phase, order) / new Complex(0, Math.PI * order);
+
+    /// <summary>
+    /// Series turns of the phase from its conductors: Σ|n| over every side / 2 (each turn has a go
+    /// and a return side) / parallel paths. The same conductor model gives the winding factors.
+    /// </summary>
+    public double SeriesTurns(int phase) => _sideTurns[phase] / 2.0 / Paths;
 
     /// <summary>Unskewed winding factor of the phase at mechanical order ν.</summary>
     public double WindingFactor(int phase, int order) =>

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace WindScript.Model;
 
 /// <summary>
@@ -35,6 +37,12 @@ public sealed class ConductorMatrix
                 result[s] += this[phase, s, l];
         return result;
     }
+
+    private static readonly ConditionalWeakTable<WindingDesign, ConductorMatrix> Computed = new();
+
+    /// <summary>The conductors of a design, built from its coils once per design instance.</summary>
+    public static ConductorMatrix Of(WindingDesign design) =>
+        Computed.GetValue(design, d => FromCoils(d.Phases.Length, d.Slots, d.Winding.Layers, d.Winding.Coils));
 
     /// <summary>Builds the matrix from coils; sides in slots or layers out of range are skipped (the checker reports them).</summary>
     public static ConductorMatrix FromCoils(int phases, int slots, int layers, IEnumerable<Coil> coils)

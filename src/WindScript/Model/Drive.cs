@@ -32,11 +32,15 @@ public sealed record Drive
 
     public TextSpan NameSpan { get; init; }
 
-    /// <summary>Phase currents at an instant, in phase order.</summary>
-    public double[] CurrentsAt(double time)
+    /// <summary>
+    /// Phase currents (A) at an instant, indexed by phase (the one place instantaneous currents
+    /// are summed): <paramref name="phases"/> entries, or one per driven phase when omitted.
+    /// </summary>
+    public double[] CurrentsAt(double time, int? phases = null)
     {
-        var i = new double[Currents.Length];
-        for (int k = 0; k < i.Length; k++) i[k] = Currents[k].At(time);
+        var i = new double[phases ?? Currents.Length];
+        foreach (var c in Currents)
+            if (c.Phase >= 0 && c.Phase < i.Length) i[c.Phase] += c.At(time);
         return i;
     }
 }

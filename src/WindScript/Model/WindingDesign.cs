@@ -41,33 +41,34 @@ public sealed record WindingDesign
     /// <summary>Machine periodicity t = gcd(Q, p).</summary>
     public int Periodicity => (int)Gcd(Slots, PolePairs);
 
-    // Cached with the winding it was built from: a `with` copy that changes the winding or
-    // the slot count must not reuse a stale matrix.
-    private (Winding Winding, int Slots, int Phases, ConductorMatrix Matrix)? _conductors;
+    /// <summary>
+    /// Signed conductors per phase, slot and layer, computed once per design instance and kept
+    /// outside it (<see cref="ConductorMatrix.Of"/>), so the design stays a plain immutable value.
+    /// </summary>
+    public ConductorMatrix Conductors => ConductorMatrix.Of(this);
 
-    /// <summary>Signed conductors per phase, slot and layer (computed once per winding).</summary>
-    public ConductorMatrix Conductors
-    {
-        get
-        {
-            if (_conductors is { } c && ReferenceEquals(c.Winding, Winding) && c.Slots == Slots && c.Phases == Phases.Length)
-                return c.Matrix;
-            var m = ConductorMatrix.FromCoils(Phases.Length, Slots, Winding.Layers, Winding.Coils);
-            _conductors = (Winding, Slots, Phases.Length, m);
-            return m;
-        }
-    }
+    /// <summary>Slots per pole per phase q = Q/(2p·m) (0 without poles or phases).</summary>
+    public double SlotsPerPolePerPhase => Poles == 0 || Phases.Length == 0 ? 0 : (double)Slots / (Poles * Phases.Length);
 
-    /// <summary>Turns of all coils of a phase (before dividing into paths).</summary>
-    public int TotalTurns(int phase)
-    {
-        int sum = 0;
-        foreach (var c in Winding.Coils) if (c.Phase == phase) sum += c.Turns;
-        return sum;
-    }
+    /// <summary>
+    /// Winding factor of a phase at mechanical order ν, skew included: the numeric factor of the
+    /// conductor model (<see cref="Analysis.WindingSpectrum.WindingFactor"/>) times the one skew
+    /// formula (<see cref="Analysis.ClosedFormFactors.Skew"/>).
+    /// </summary>
+    public double WindingFactor(int phase, int order) =>
+        Analysis.WindingSpectrum.Of(this).WindingFactor(phase, order) * Analysis.ClosedFormFactors.Skew(order, Geometry.SkewSlots, Slots);
 
-    /// <summary>Series turns per phase: all turns of the phase divided by the parallel paths.</summary>
-    public double SeriesTurns(int phase) => (double)TotalTurns(phase) / Math.Max(1, Winding.Paths);
+    /// <summary>Winding factor of a phase at the working order ν = p, skew included.</summary>
+    public double FundamentalWindingFactor(int phase) => WindingFactor(phase, PolePairs);
+
+    /// <summary>Turns of the phase before dividing into paths, from the conductor model: Σ|n| over its sides / 2.</summary>
+    public int TotalTurns(int phase) => Analysis.WindingSpectrum.Of(this).SideTurns(phase) / 2;
+
+    /// <summary>
+    /// Series turns per phase from the conductor model (the one the winding factors come from):
+    /// Σ|n| over the phase's sides / 2 / parallel paths.
+    /// </summary>
+    public double SeriesTurns(int phase) => Analysis.WindingSpectrum.Of(this).SeriesTurns(phase);
 
     public static long Gcd(long a, long b)
     {

@@ -23,7 +23,7 @@ public readonly record struct SweepShard(int Index, int Count)
             && int.TryParse(parts[1], NumberStyles.None, CultureInfo.InvariantCulture, out int n)
             && n >= 1 && k >= 1 && k <= n)
             return new SweepShard(k, n);
-        error = $"'{text}' is not a shard: write K/N with 1 <= K <= N, e.g. 3/8";
+        error = $"'{text}' is not a shard: write K/N with 1 <= K <= N, e.g. 3/8, or auto";
         return null;
     }
 

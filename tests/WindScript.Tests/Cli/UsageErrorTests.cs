@@ -56,6 +56,10 @@ public sealed class UsageErrorTests
         Add("--shard", "sweep", "--slots", "6..12", "--poles", "2..4", "--shard", "9/4");
         Add("--threads", "sweep", "--slots", "6..12", "--poles", "2..4", "--threads", "100000");
         Add("--threads", "sweep", "--slots", "6..12", "--poles", "2..4", "--threads", "lots");
+        Add("--shards", "sweep", "--slots", "6..12", "--poles", "2..4", "--shard", "auto", "--shards", "0");
+        Add("--shards", "sweep", "--slots", "6..12", "--poles", "2..4", "--shard", "auto", "--shards", "some");
+        Add("--output", "sweep", "--slots", "6..12", "--poles", "2..4", "--output", "/nonexistent-dir/part.jsonl");
+        Add("--skip-existing", "sweep", "--slots", "6..12", "--poles", "2..4", "--skip-existing=often");
         Add("--format", "diff", f, f, "--format", "html");
         Add("--kind", "plot", f, "--kind", "pie", "-o", "x.svg");
         Add("--at", "plot", f, "--kind", "mmf", "--at", "noon", "-o", Path.Combine(Path.GetTempPath(), "windscript-usage.svg"));
