@@ -104,7 +104,7 @@ public static class SweepCommand
         try { part = path is null ? null : new PartFile(path); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            io.Err.WriteLine($"windscript sweep: --output: cannot write '{path}': {IoFailure.Describe(e)}");
+            io.Err.WriteLine($"windscript sweep: cannot write --output '{path}': {IoFailure.Describe(e)}");
             return ExitCodes.Usage;
         }
         using (part)
