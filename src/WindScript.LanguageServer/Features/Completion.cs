@@ -15,7 +15,7 @@ namespace WindScript.LanguageServer.Features;
 public static class Completion
 {
     private static readonly string[] TopLevel = ["machine", "winding", "drive", "let"];
-    private static readonly string[] MachineBody = ["slots", "poles", "phases", "bore", "stack", "gap", "slot_opening", "rotor_radius", "skew", "phase_shift", "gap_flux_density", "let"];
+    private static readonly string[] MachineBody = ["slots", "poles", "phases", "bore", "stack", "gap", "slot_opening", "rotor_radius", "rotor", "skew", "phase_shift", "gap_flux_density", "let"];
     private static readonly string[] WindingBody = ["layers", "turns", "pitch", "paths", "series_turns", "conductors_per_slot", "coil", "top:", "bottom:", "slots:", "for", "group", "let"];
     private static readonly string[] GroupBody = ["turns", "pitch", "coil", "top:", "bottom:", "slots:", "for", "let"];
     private static readonly string[] LoopBody = ["coil", "for", "let"];

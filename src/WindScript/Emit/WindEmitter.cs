@@ -56,6 +56,7 @@ public static class WindEmitter
         Millimetres("gap", g.Gap);
         Millimetres("slot_opening", g.SlotOpening);
         Millimetres("rotor_radius", g.RotorRadius);
+        if (g.RotorOutside) Line(o, "rotor outside");
         if (g.SkewSlots != 0) Line(o, $"skew {Number(g.SkewSlots)} slots");
         if (g.GapFluxDensity is { } b) Line(o, $"gap_flux_density {Number(b)} T");
         o.Append("}\n");

@@ -60,7 +60,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
     }
 
     private static bool IsMachineProperty(string keyword) => keyword is "slots" or "poles" or "bore" or "stack" or "gap"
-        or "slot_opening" or "rotor_radius" or "skew" or "phase_shift" or "gap_flux_density";
+        or "slot_opening" or "rotor_radius" or "rotor" or "skew" or "phase_shift" or "gap_flux_density";
 
     private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
     {
@@ -108,6 +108,12 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case "gap": return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
             case "slot_opening": return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
             case "rotor_radius": return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case "rotor":
+                // `rotor outside` (hub and fan motors) or `rotor inside` (the default).
+                if (p.Value is NameExpressionSyntax { Name.Text: "outside" or "inside" } word)
+                    return (facts, g with { RotorOutside = word.Name.Text == "outside" });
+                diagnostics.Add(DiagnosticCatalog.RotorPositionUnknown, p.Value.Span, "'rotor' takes 'inside' or 'outside'");
+                return (facts, g);
             case "gap_flux_density":
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
             case "phase_shift":

@@ -10,7 +10,7 @@ internal static class Keywords
     public static readonly IReadOnlySet<string> Properties = new HashSet<string>
     {
         // machine
-        "slots", "poles", "bore", "stack", "gap", "slot_opening", "rotor_radius", "skew", "phase_shift", "gap_flux_density",
+        "slots", "poles", "bore", "stack", "gap", "slot_opening", "rotor_radius", "rotor", "skew", "phase_shift", "gap_flux_density",
         // winding and group
         "layers", "turns", "pitch", "paths", "series_turns", "conductors_per_slot",
     };
