@@ -34,8 +34,8 @@ public static class DocumentSymbols
             switch (statement)
             {
                 case BlockSyntax block:
-                    var name = block.Name?.Text ?? "(unnamed)";
-                    var selection = block.Name?.Span ?? block.Keyword.Span;
+                    var name = block.Name.IsMissing ? "(unnamed)" : block.Name.Text;
+                    var selection = block.Name.IsMissing ? block.Keyword.Span : block.Name.Span;
                     items.Add(new Item(name, Detail(block, c), Kind(block.Keyword.Text), block.Span, selection, Collect(block.Body, c)));
                     break;
                 case LetSyntax let:
@@ -58,7 +58,7 @@ public static class DocumentSymbols
         {
             "machine" when design is not null => $"machine · {design.Slots} slots, {design.Poles} poles, {design.Phases.Length} phases",
             "winding" when design is not null => $"winding · {design.Winding.Layers} layer{(design.Winding.Layers == 1 ? "" : "s")}, {design.Winding.Coils.Length} coils",
-            "group" when design is not null => $"group · {design.Winding.Coils.Count(k => k.Group == block.Name?.Text)} coils",
+            "group" when design is not null => $"group · {design.Winding.Coils.Count(k => k.Group == block.Name.Text)} coils",
             _ => block.Keyword.Text,
         };
     }

@@ -219,7 +219,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
 
     private static HoverContent? ForBlock(Compilation c, Func<AnalysisResult?> analysis, BlockSyntax block)
     {
-        var name = block.Name?.Text ?? "";
+        var name = block.Name.Text;
         if (c.Design is not { } d) return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", [KeywordHelp.For(block.Keyword.Text) ?? ""]);
         var lines = block.Keyword.Text switch
         {

@@ -18,7 +18,7 @@ internal static class FeasibilityCheck
         int layers = d.Winding.Layers;
         var report = Feasibility.Check(d.Slots, d.Poles, belts, layers);
         if (report.IsFeasible) return;
-        var at = d.SlotsSpan != default ? d.SlotsSpan : d.MachineSpan with { Length = 7 };
+        var at = d.SlotsSpan != default ? d.SlotsSpan : d.MachineKeywordSpan;
         var descriptor = layers == 1 ? DiagnosticCatalog.NoBalancedSingleLayer : DiagnosticCatalog.NoBalancedWinding;
         c.Diagnostics.Add(descriptor.At(at, $"{d.Slots} slots, {d.Poles} poles and {c.PhaseCount} phases admit no balanced {(layers == 1 ? "single" : "double")}-layer winding: {report.Condition}; {report.NearestText()}")
             with { Related = d.PolesSpan != default ? [new RelatedSpan(d.PolesSpan, "the pole count")] : [] });

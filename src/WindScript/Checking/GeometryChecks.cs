@@ -10,7 +10,7 @@ internal static class GeometryChecks
     {
         var g = c.Design.Geometry;
         var machine = c.Design.MachineSpan;
-        var keyword = machine with { Length = Math.Min(7, machine.Length) };
+        var keyword = c.Design.MachineKeywordSpan;
         Text.TextSpan At(string property) => SourceEdits.PropertySpan(c.Syntax, machine, property) ?? keyword;
         string Mm(double metres) => (metres * 1000).ToString("0.###", CultureInfo.InvariantCulture) + " mm";
         if (g.Gap is { } gap && g.BoreRadius is { } radius && gap >= radius)

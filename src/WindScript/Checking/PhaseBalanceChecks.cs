@@ -92,5 +92,5 @@ internal static class PhaseBalanceChecks
         return $"{string.Join("; ", odd)}, {others} {format(report.Common)}";
     }
 
-    internal static TextSpan WindingKeyword(CheckContext c) => c.Design.Winding.Span with { Length = Math.Min(7, c.Design.Winding.Span.Length) };
+    internal static TextSpan WindingKeyword(CheckContext c) => c.Design.Winding.KeywordSpan;
 }

@@ -14,24 +14,30 @@ internal static class SourceEdits
         return property is null ? null : new CodeFix(title, [new TextEdit(property.Value.Span, newValue)]);
     }
 
-    /// <summary>Reverses the coil written at <paramref name="coilSpan"/>: a 'coil' statement or a slot-pattern entry.</summary>
+    /// <summary>
+    /// Reverses the coil written at <paramref name="coilSpan"/>: a 'coil' statement or a
+    /// slot-pattern entry. The edit comes from the tokens: the sign token is removed (with the
+    /// space between it and the phase) or a '-' is written before the phase, however the line is spaced.
+    /// </summary>
     public static CodeFix? FlipPolarity(SyntaxTree tree, TextSpan coilSpan)
     {
-        var text = tree.Source.Text;
         if (Find<CoilSyntax>(tree.Root.Statements, coilSpan) is { } coil)
         {
-            var edit = coil.Reversed
-                ? new TextEdit(TextSpan.FromBounds(coil.Phase.Span.Start - 1, coil.Phase.Span.Start), "")
+            var edit = coil.Minus is { } minus
+                ? new TextEdit(TextSpan.FromBounds(minus.Span.Start, coil.Phase.Span.Start), "")
                 : new TextEdit(new TextSpan(coil.Phase.Span.Start, 0), "-");
             return new CodeFix($"Reverse the coil (write {(coil.Reversed ? "" : "-")}{coil.Phase.Text})", [edit]);
         }
         // A pattern entry such as "-U" or "U". A single-layer coil spans two entries: no local fix.
-        if (coilSpan.Length > 0 && coilSpan.End <= text.Length && !text.AsSpan(coilSpan.Start, coilSpan.Length).ContainsAny(' ', '\t'))
+        if (FindEntry(tree.Root.Statements, coilSpan) is { Phase: { } phase } entry)
         {
-            int start = coilSpan.Start;
-            char first = text[start];
-            if (first is '-' or '+') return new CodeFix("Reverse the coil", [new TextEdit(new TextSpan(start, 1), first == '-' ? "" : "-")]);
-            if (Lexer.IsWordStart(first)) return new CodeFix("Reverse the coil", [new TextEdit(new TextSpan(start, 0), "-")]);
+            var edit = entry.Sign switch
+            {
+                { Kind: TokenKind.Minus } sign => new TextEdit(TextSpan.FromBounds(sign.Span.Start, phase.Span.Start), ""),
+                { } plus => new TextEdit(plus.Span, "-"),
+                null => new TextEdit(new TextSpan(phase.Span.Start, 0), "-"),
+            };
+            return new CodeFix("Reverse the coil", [edit]);
         }
         return null;
     }
@@ -40,6 +46,18 @@ internal static class SourceEdits
     public static TextSpan? PropertySpan(SyntaxTree? tree, TextSpan blockSpan, string keyword) =>
         tree?.Root.Statements.OfType<BlockSyntax>().FirstOrDefault(b => b.Span == blockSpan)?.Body
             .OfType<PropertySyntax>().FirstOrDefault(p => p.Keyword.Text == keyword)?.Span;
+
+    private static PatternEntrySyntax? FindEntry(IEnumerable<StatementSyntax> statements, TextSpan span)
+    {
+        foreach (var s in statements)
+        {
+            if (!s.Span.Contains(span)) continue;
+            if (s is PatternSyntax pattern) return pattern.Entries.FirstOrDefault(e => e.Span == span);
+            var body = s switch { BlockSyntax b => b.Body, ForSyntax f => f.Body, _ => null };
+            if (body is not null && FindEntry(body, span) is { } inner) return inner;
+        }
+        return null;
+    }
 
     private static T? Find<T>(IEnumerable<StatementSyntax> statements, TextSpan span) where T : StatementSyntax
     {

@@ -2,6 +2,10 @@ namespace WindScript.Diagnostics;
 
 public static partial class DiagnosticCatalog
 {
+    public static readonly DiagnosticDescriptor RepeatedCoilOption = new(
+        "WS2020", Severity.Error, "Coil option given twice",
+        "A coil states the same option twice, as in 'coil U: 1 -> 7 turns 5 turns 60'. A coil has one turn count and one layer for its go side; with two, one of them is a mistake and no rule can tell which the designer meant, so neither is guessed: remove the one that is wrong. The first is marked as related.");
+
     public static readonly DiagnosticDescriptor UndefinedName = new(
         "WS2001", Severity.Error, "Undefined name",
         "A name is used that no 'let', loop or declaration above it defines. Names are visible below their definition, in the same block and the blocks nested in it. Check the spelling or add a 'let'.");

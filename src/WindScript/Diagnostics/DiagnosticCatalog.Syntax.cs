@@ -27,4 +27,14 @@ public static partial class DiagnosticCatalog
         not read at all; the marked bracket is the first one past the limit. Flatten the
         expression or the blocks.
         """);
+
+    public static readonly DiagnosticDescriptor MissingBlockName = new(
+        "WS1004", Severity.Error, "Block without a name",
+        """
+        Every machine, winding, group and drive block is named (`winding main {`), so that
+        diagnostics, the review diff, hover and go-to-definition can refer to it and so that
+        two drives of one file can be told apart. The marked place is where the name belongs.
+        The block is still read and checked as if it had a name, so this is the only problem
+        the missing name causes; add a name to clear it.
+        """);
 }

@@ -27,6 +27,9 @@ public sealed record Winding
 
     public TextSpan Span { get; init; }
 
+    /// <summary>The span of the block's <c>winding</c> keyword, where whole-winding diagnostics point.</summary>
+    public TextSpan KeywordSpan { get; init; }
+
     /// <summary>Spans of the declarations of paths, series turns and conductors (for diagnostics and fixes).</summary>
     public TextSpan PathsSpan { get; init; }
     public TextSpan SeriesTurnsSpan { get; init; }

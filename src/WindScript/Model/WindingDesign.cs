@@ -34,6 +34,9 @@ public sealed record WindingDesign
     public ImmutableArray<string> Defaults { get; init; } = [];
 
     public TextSpan MachineSpan { get; init; }
+
+    /// <summary>The span of the <c>machine</c> keyword, where whole-machine diagnostics point.</summary>
+    public TextSpan MachineKeywordSpan { get; init; }
     public TextSpan SlotsSpan { get; init; }
     public TextSpan PolesSpan { get; init; }
     public TextSpan PhasesSpan { get; init; }

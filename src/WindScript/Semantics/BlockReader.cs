@@ -15,12 +15,12 @@ internal static class BlockReader
             BlockSyntax b => ($"a {b.Keyword.Text} block", b.Keyword.Span),
             PhasesSyntax p => ("'phases'", p.Keyword.Span),
             FlagSyntax f => ($"'{f.Keyword.Text}'", f.Keyword.Span),
-            CoilSyntax c => ("a coil", c.Span with { Length = 4 }),
+            CoilSyntax c => ("a coil", c.Keyword.Span),
             PatternSyntax p => ("a slot pattern", p.Layer.Span),
-            ForSyntax f => ("a 'for' loop", f.Span with { Length = 3 }),
+            ForSyntax f => ("a 'for' loop", f.Keyword.Span),
             PhaseCurrentSyntax c => ("a phase current", c.Phase.Span),
-            BalancedSyntax b => ("'balanced'", b.Span with { Length = 8 }),
-            LetSyntax l => ("'let'", l.Span with { Length = 3 }),
+            BalancedSyntax b => ("'balanced'", b.Keyword.Span),
+            LetSyntax l => ("'let'", l.Keyword.Span),
             _ => ("this statement", statement.Span),
         };
         diagnostics.Add(DiagnosticCatalog.MisplacedStatement, span, $"{what} is not allowed in {blockKind}");

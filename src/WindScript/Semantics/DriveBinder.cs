@@ -53,12 +53,12 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
 
         return new Drive
         {
-            Name = block.Name?.Text ?? "",
+            Name = block.Name.Text,
             Currents = [.. Enumerable.Range(0, m).Select(k => new PhaseCurrent(k, [.. components[k]], spans[k]))],
             Neutral = neutral,
             Sequence = sequence,
             Span = block.Span,
-            NameSpan = block.Name?.Span ?? block.Keyword.Span,
+            NameSpan = block.Name.IsMissing ? block.Keyword.Span : block.Name.Span,
         };
     }
 

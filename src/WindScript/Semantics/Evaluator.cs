@@ -56,10 +56,9 @@ public static class Evaluator
         else
         {
             machine = new MachineBinder(diagnostics, evaluator, model).Bind(machineBlock, top);
-            model.Define(machine.Name, SymbolKind.Machine, machineBlock.Name?.Span ?? machineBlock.Keyword.Span);
+            if (!machineBlock.Name.IsMissing) model.Define(machine.Name, SymbolKind.Machine, machineBlock.Name.Span);
             // A property whose line did not parse was reported already; do not call it missing.
-            var brokenLines = machineBlock.Body.OfType<ErrorStatementSyntax>()
-                .Select(e => tree.Source.Slice(e.Span).Split([' ', ':', '\t', '\r', '\n'])[0]).ToHashSet();
+            var brokenLines = machineBlock.Body.OfType<ErrorStatementSyntax>().Select(e => e.Tokens[0].Text).ToHashSet();
             void Require(bool present, string keyword, string what)
             {
                 if (!present && !brokenLines.Contains(keyword)) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
@@ -82,15 +81,16 @@ public static class Evaluator
         else
         {
             winding = new WindingBinder(diagnostics, evaluator, model, machine, phases, budget, defaults).Bind(windingBlock, top);
-            if (windingBlock.Name is { } wn) model.Define(wn.Text, SymbolKind.Winding, wn.Span);
+            if (!windingBlock.Name.IsMissing) model.Define(windingBlock.Name.Text, SymbolKind.Winding, windingBlock.Name.Span);
         }
 
         var drives = ImmutableArray.CreateBuilder<Drive>();
         var driveNames = new Dictionary<string, TextSpan>();
         foreach (var block in driveBlocks)
         {
-            if (block.Name is { } name)
+            if (!block.Name.IsMissing)
             {
+                var name = block.Name;
                 if (driveNames.TryGetValue(name.Text, out var first))
                     diagnostics.Add(DiagnosticCatalog.DuplicateName.At(name.Span, $"drive '{name.Text}' is already defined")
                         with { Related = [new RelatedSpan(first, "first defined here")] });
@@ -119,6 +119,7 @@ public static class Evaluator
                 Drives = drives.ToImmutable(),
                 Defaults = [.. defaults.Distinct()],
                 MachineSpan = machine.Span,
+                MachineKeywordSpan = machine.KeywordSpan,
                 SlotsSpan = machine.SlotsSpan,
                 PolesSpan = machine.PolesSpan,
                 PhasesSpan = machine.PhasesSpan,

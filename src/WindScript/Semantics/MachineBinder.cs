@@ -17,6 +17,7 @@ internal sealed record MachineFacts
     public double? PhaseShiftDegrees { get; init; }
     public Geometry Geometry { get; init; } = new();
     public TextSpan Span { get; init; }
+    public TextSpan KeywordSpan { get; init; }
     public TextSpan SlotsSpan { get; init; }
     public TextSpan PolesSpan { get; init; }
     public TextSpan PhasesSpan { get; init; }
@@ -28,7 +29,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
     public MachineFacts Bind(BlockSyntax block, Scope parent)
     {
         var scope = new Scope(parent);
-        var facts = new MachineFacts { Name = block.Name?.Text ?? "", Span = block.Span };
+        var facts = new MachineFacts { Name = block.Name.Text, Span = block.Span, KeywordSpan = block.Keyword.Span };
         var seen = new Dictionary<string, PropertySyntax>();
         var geometry = new Geometry();
         foreach (var statement in block.Body)

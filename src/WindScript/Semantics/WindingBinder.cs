@@ -52,7 +52,7 @@ internal sealed class WindingBinder(
         }
 
         if (layers is null && !seen.ContainsKey("layers"))
-            diagnostics.Add(DiagnosticCatalog.MissingDeclaration, block.Keyword.Span, $"winding '{block.Name?.Text}' does not say how many layers it has (add 'layers 1' or 'layers 2')");
+            diagnostics.Add(DiagnosticCatalog.MissingDeclaration, block.Keyword.Span, $"winding '{block.Name.Text}' does not say how many layers it has (add 'layers 1' or 'layers 2')");
         _layers = layers ?? 2;
 
         // Pass 2: coils, in source order.
@@ -62,7 +62,7 @@ internal sealed class WindingBinder(
 
         return new Winding
         {
-            Name = block.Name?.Text ?? "",
+            Name = block.Name.Text,
             Layers = _layers,
             Paths = paths ?? 1,
             Coils = [.. _coils],
@@ -70,6 +70,7 @@ internal sealed class WindingBinder(
             DeclaredSeriesTurns = seriesTurns,
             DeclaredConductorsPerSlot = conductors,
             Span = block.Span,
+            KeywordSpan = block.Keyword.Span,
             PathsSpan = pathsSpan,
             SeriesTurnsSpan = seriesSpan,
             ConductorsPerSlotSpan = conductorsSpan,
@@ -121,9 +122,10 @@ internal sealed class WindingBinder(
 
     private void BindGroup(BlockSyntax group, Scope parent, GroupSettings inherited, Dictionary<string, TextSpan> groupNames)
     {
-        string name = group.Name?.Text ?? "";
-        if (group.Name is { } n)
+        string name = group.Name.Text;
+        if (!group.Name.IsMissing)
         {
+            var n = group.Name;
             if (groupNames.TryGetValue(name, out var first))
                 diagnostics.Add(DiagnosticCatalog.DuplicateName.At(n.Span, $"group '{name}' is already defined in this winding")
                     with { Related = [new RelatedSpan(first, "first defined here")] });
@@ -179,7 +181,7 @@ internal sealed class WindingBinder(
         if (from is not { } a || to is not { } b) return;
         long count = (long)b - a;
         count = count / step >= 0 ? count / step + 1 : 0;
-        if (!budget.Take(count, loop.Span with { Length = 3 })) return;
+        if (!budget.Take(count, loop.Keyword.Span)) return;
         for (long i = 0; i < count; i++)
         {
             loopScope.SetLoopValue(loop.Variable.Text, a + i * step);
@@ -201,6 +203,7 @@ internal sealed class WindingBinder(
 
     private void BindCoil(CoilSyntax coil, Scope scope, GroupSettings settings)
     {
+        ReportRepeatedOptions(coil);
         var phase = phases.Resolve(coil.Phase);
         int? go = BindSlot(coil.Go, scope);
         int? ret = BindSlot(coil.Return, scope);
@@ -223,6 +226,18 @@ internal sealed class WindingBinder(
         }
         if (phase is null || go is null || ret is null || turns is null) return;
         _coils.Add(new Coil(phase.Value, go.Value, ret.Value, goLayer, returnLayer, turns.Value, coil.Reversed ? -1 : 1, settings.Name, coil.Span));
+    }
+
+    // Each option once: with two turn counts (or layers) one is a mistake, and which one is not ours to guess.
+    private void ReportRepeatedOptions(CoilSyntax coil)
+    {
+        for (int i = 1; i < coil.Options.Count; i++)
+        {
+            var option = coil.Options[i];
+            if (coil.Options.Take(i).FirstOrDefault(o => o.Keyword.Text == option.Keyword.Text) is not { } first) continue;
+            diagnostics.Add(DiagnosticCatalog.RepeatedCoilOption.At(option.Keyword.Span, $"this coil already gives '{option.Keyword.Text}'")
+                with { Related = [new RelatedSpan(first.Span, "first given here")] });
+        }
     }
 
     private int? BindSlot(ExpressionSyntax expression, Scope scope)

@@ -6,10 +6,10 @@ namespace WindScript.Syntax;
 public abstract record WaveTermSyntax(TextSpan Span) : SyntaxNode(Span);
 
 /// <summary><c>dc 8 A</c>.</summary>
-public sealed record DcTermSyntax(ExpressionSyntax Current, TextSpan Span) : WaveTermSyntax(Span);
+public sealed record DcTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Current, TextSpan Span) : WaveTermSyntax(Span);
 
 /// <summary><c>sine 12 A rms at 50 Hz phase -30 deg</c>: i = Î·cos(ωt + φ).</summary>
-public sealed record SineTermSyntax(ExpressionSyntax Amplitude, KeywordSyntax Measure, ExpressionSyntax Frequency, ExpressionSyntax? Phase, TextSpan Span)
+public sealed record SineTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Amplitude, KeywordSyntax Measure, ExpressionSyntax Frequency, ExpressionSyntax? Phase, TextSpan Span)
     : WaveTermSyntax(Span);
 
 /// <summary>A term with the sign it is added with.</summary>
@@ -19,5 +19,5 @@ public sealed record SignedTermSyntax(bool Negated, WaveTermSyntax Term, TextSpa
 public sealed record PhaseCurrentSyntax(NameSyntax Phase, IReadOnlyList<SignedTermSyntax> Terms, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary><c>balanced sine 12 A rms at 50 Hz sequence U V W</c>: one current per phase, displaced in time by 360/m.</summary>
-public sealed record BalancedSyntax(SineTermSyntax Wave, KeywordSyntax SequenceKeyword, IReadOnlyList<NameSyntax> Sequence, TextSpan Span)
+public sealed record BalancedSyntax(KeywordSyntax Keyword, SineTermSyntax Wave, KeywordSyntax SequenceKeyword, IReadOnlyList<NameSyntax> Sequence, TextSpan Span)
     : StatementSyntax(Span);

@@ -16,24 +16,15 @@ namespace WindScript.Syntax;
 /// </summary>
 public static class Parser
 {
-    // The token array of the parse in progress: error recovery needs it to place messages.
-    [ThreadStatic] private static Token[]? _tokens;
-
     public static CompilationUnitSyntax ParseTokens(Token[] tokens)
     {
-        _tokens = tokens;
-        try
-        {
-            var result = File.Parse(tokens);
-            // The file parser cannot fail (every statement recovers), but stay total regardless.
-            return result.Success
-                ? result.Value
-                : new CompilationUnitSyntax([new ErrorStatementSyntax("could not read this file", tokens[0].Span, new TextSpan(0, tokens[^1].Span.End))], new TextSpan(0, tokens[^1].Span.End));
-        }
-        finally
-        {
-            _tokens = null;
-        }
+        var result = File.Parse(tokens);
+        // The file parser cannot fail (every statement recovers), but stay total regardless.
+        var unit = result.Success
+            ? result.Value
+            : new CompilationUnitSyntax([new PendingErrorSyntax(0, tokens.Length, [])], new TextSpan(0, tokens[^1].Span.End));
+        // Recovery only knows token positions; give each broken line its tokens now.
+        return ErrorStatements.Resolve(unit, tokens);
     }
 
     // ---- tokens ---------------------------------------------------------------------------
@@ -113,7 +104,7 @@ public static class Parser
     // ---- statements -----------------------------------------------------------------------
 
     private static readonly Parser<Token, StatementSyntax> Let = Map(
-        (kw, name, _, value) => (StatementSyntax)new LetSyntax(name, value, kw.Span.Cover(value.Span)),
+        (kw, name, _, value) => (StatementSyntax)new LetSyntax(KeywordSyntax.From(kw), name, value, kw.Span.Cover(value.Span)),
         Keyword("let"), Name, EqualsSign, Expression);
 
     private static readonly Parser<Token, StatementSyntax> Property = Map(
@@ -132,8 +123,8 @@ public static class Parser
         KeywordIn(Keywords.Flags, "'neutral'").Select(kw => (StatementSyntax)new FlagSyntax(KeywordSyntax.From(kw), kw.Span));
 
     private static readonly Parser<Token, PatternEntrySyntax> PatternEntry = OneOf(
-        Token(t => t.Kind == TokenKind.Word && t.Text == "_").Select(t => new PatternEntrySyntax(false, null, t.Span)),
-        Map((sign, name) => new PatternEntrySyntax(sign.HasValue && sign.Value.Kind == TokenKind.Minus, name,
+        Token(t => t.Kind == TokenKind.Word && t.Text == "_").Select(t => new PatternEntrySyntax(null, null, t.Span)),
+        Map((sign, name) => new PatternEntrySyntax(sign.HasValue ? sign.Value : null, name,
                 sign.HasValue ? sign.Value.Span.Cover(name.Span) : name.Span),
             Minus.Or(Plus).Optional(), Name)).Labelled("a phase such as U or -U, or '_'");
 
@@ -151,18 +142,16 @@ public static class Parser
     private static readonly Parser<Token, KeywordSyntax> LayerName =
         Keyword("top").Or(Keyword("bottom")).Labelled("'top' or 'bottom'").Select(KeywordSyntax.From);
 
-    private static readonly Parser<Token, (ExpressionSyntax? Turns, KeywordSyntax? Layer, TextSpan Span)> CoilOption = OneOf(
-        Map((kw, e) => ((ExpressionSyntax?)e, (KeywordSyntax?)null, kw.Span.Cover(e.Span)), Keyword("turns"), Expression),
-        Map((kw, l) => ((ExpressionSyntax?)null, (KeywordSyntax?)l, kw.Span.Cover(l.Span)), Keyword("layer"), LayerName));
+    private static readonly Parser<Token, CoilOptionSyntax> CoilOption = OneOf(
+        Map((kw, e) => (CoilOptionSyntax)new CoilTurnsSyntax(KeywordSyntax.From(kw), e, kw.Span.Cover(e.Span)), Keyword("turns"), Expression),
+        Map((kw, l) => (CoilOptionSyntax)new CoilLayerSyntax(KeywordSyntax.From(kw), l, kw.Span.Cover(l.Span)), Keyword("layer"), LayerName));
 
     private static readonly Parser<Token, StatementSyntax> Coil = Map(
         (kw, sign, phase, go, ret, options) =>
         {
             var opts = options.ToArray();
-            var turns = opts.LastOrDefault(o => o.Turns is not null).Turns;
-            var layer = opts.LastOrDefault(o => o.Layer is not null).Layer;
             var end = opts.Length > 0 ? opts[^1].Span : ret.Span;
-            return (StatementSyntax)new CoilSyntax(sign.HasValue, phase, go, ret, turns, layer, kw.Span.Cover(end));
+            return (StatementSyntax)new CoilSyntax(KeywordSyntax.From(kw), sign.HasValue ? sign.Value : null, phase, go, ret, opts, kw.Span.Cover(end));
         },
         Keyword("coil"),
         Minus.Optional(),
@@ -172,7 +161,7 @@ public static class Parser
         CoilOption.Many());
 
     private static readonly Parser<Token, SineTermSyntax> Sine = Map(
-        (kw, amplitude, measure, _, frequency, phase) => new SineTermSyntax(amplitude, KeywordSyntax.From(measure), frequency, phase.GetValueOrDefault(),
+        (kw, amplitude, measure, _, frequency, phase) => new SineTermSyntax(KeywordSyntax.From(kw), amplitude, KeywordSyntax.From(measure), frequency, phase.GetValueOrDefault(),
             kw.Span.Cover(phase.HasValue ? phase.Value.Span : frequency.Span)),
         Keyword("sine"),
         SignedPrimary,
@@ -182,7 +171,7 @@ public static class Parser
         Keyword("phase").Then(SignedPrimary).Optional());
 
     private static readonly Parser<Token, WaveTermSyntax> Dc = Map(
-        (kw, value) => (WaveTermSyntax)new DcTermSyntax(value, kw.Span.Cover(value.Span)), Keyword("dc"), SignedPrimary);
+        (kw, value) => (WaveTermSyntax)new DcTermSyntax(KeywordSyntax.From(kw), value, kw.Span.Cover(value.Span)), Keyword("dc"), SignedPrimary);
 
     private static readonly Parser<Token, WaveTermSyntax> WaveTerm =
         OneOf(Sine.Select(s => (WaveTermSyntax)s), Dc);
@@ -202,7 +191,7 @@ public static class Parser
         (kw, wave, seqKw, names) =>
         {
             var list = names.ToArray();
-            return (StatementSyntax)new BalancedSyntax(wave, KeywordSyntax.From(seqKw), list, kw.Span.Cover(list[^1].Span));
+            return (StatementSyntax)new BalancedSyntax(KeywordSyntax.From(kw), wave, KeywordSyntax.From(seqKw), list, kw.Span.Cover(list[^1].Span));
         },
         Keyword("balanced"), Sine, Keyword("sequence"), Name.AtLeastOnce());
 
@@ -215,15 +204,21 @@ public static class Parser
         Statement.Many(),
         RBrace.Optional());
 
+    // A block without a name still parses (its body is bound and checked); the missing name is
+    // reported once, at its place, from the tree.
+    private static readonly Parser<Token, NameSyntax> BlockName =
+        Name.Or(Lookahead(LBrace).Select(brace => NameSyntax.Missing(brace.Span.Start))).Labelled("a name");
+
     private static readonly Parser<Token, StatementSyntax> Block = Map(
         (kw, name, body) => (StatementSyntax)new BlockSyntax(KeywordSyntax.From(kw), name, body.Body, body.Closed, kw.Span.Cover(body.End)),
         KeywordIn(Keywords.Blocks, "a block such as machine, winding or drive"),
-        Name,
+        BlockName,
         Body);
+
 
     private static readonly Parser<Token, StatementSyntax> For = Map(
         (kw, variable, from, to, step, body) =>
-            (StatementSyntax)new ForSyntax(variable, from, to, step.GetValueOrDefault(), body.Body, body.Closed, kw.Span.Cover(body.End)),
+            (StatementSyntax)new ForSyntax(KeywordSyntax.From(kw), variable, from, to, step.GetValueOrDefault(), body.Body, body.Closed, kw.Span.Cover(body.End)),
         Keyword("for"),
         Name.Before(Keyword("in")),
         Expression.Before(DotDot),
@@ -277,66 +272,20 @@ public static class Parser
     private static readonly Parser<Token, StatementSyntax> StatementRule =
         Lookahead(Token(t => t.Kind is not (TokenKind.RBrace or TokenKind.End)))
             .Then(StatementCore.Before(EndOfStatement).Before(NewLine.SkipMany())
-                .RecoverWith(error => Map((_, end) => MakeError(error, end), SkipLine, CurrentOffset)));
+                .RecoverWith(error => SkipLine.Then(CurrentOffset).Select(end => (StatementSyntax)new PendingErrorSyntax(error.ErrorOffset, end, ExpectedLabels(error)))));
 
     // A '}' with no block to close, at top level.
     private static readonly Parser<Token, StatementSyntax> StrayBrace =
-        RBrace.Before(NewLine.SkipMany()).Select(t => (StatementSyntax)new ErrorStatementSyntax("this '}' closes no block", t.Span, t.Span));
+        RBrace.Before(NewLine.SkipMany()).Select(t => (StatementSyntax)new ErrorStatementSyntax(SyntaxErrorKind.StrayBrace, [t], 0, [], t.Span, t.Span));
 
     private static readonly Parser<Token, CompilationUnitSyntax> File = Map(
         (items, end) => new CompilationUnitSyntax(items.ToArray(), new TextSpan(0, end.Span.End)),
         NewLine.SkipMany().Then(OneOf(Statement, StrayBrace).Many()),
         Kind(TokenKind.End, "end of file"));
 
-    private static StatementSyntax MakeError(ParseError<Token> error, int endOffset)
-    {
-        var tokens = _tokens!;
-        int at = Math.Clamp(error.ErrorOffset, 0, tokens.Length - 1);
-        int first = StatementStart(tokens, at);
-        // An unknown word at the start of a line is the mistake, whatever follows it.
-        if (tokens[first].Kind == TokenKind.Word && !Keywords.IsReserved(tokens[first].Text) && tokens[first + 1].Kind != TokenKind.Equals)
-            at = first;
-        var found = tokens[at];
-        // Point at the offending token; at an end of line, point just after the last word so
-        // the caret sits where something is missing.
-        var errorSpan = found.Kind is TokenKind.NewLine or TokenKind.End && at > 0
-            ? new TextSpan(tokens[at - 1].Span.End, 0)
-            : found.Span;
-        int start = StatementStart(tokens, at);
-        int last = Math.Clamp(endOffset - 1, start, tokens.Length - 1);
-        var span = TextSpan.FromBounds(tokens[start].Span.Start, Math.Max(tokens[last].Span.End, errorSpan.End));
-        return new ErrorStatementSyntax(Describe(error, tokens, at, start), errorSpan, span);
-    }
-
-    private static int StatementStart(Token[] tokens, int at)
-    {
-        int i = Math.Min(at, tokens.Length - 1);
-        while (i > 0 && tokens[i - 1].Kind is not (TokenKind.NewLine or TokenKind.LBrace or TokenKind.RBrace)) i--;
-        return i;
-    }
-
-    private static string Describe(ParseError<Token> error, Token[] tokens, int at, int statementStart)
-    {
-        var found = tokens[at];
-        if (at == statementStart && found.Kind == TokenKind.Word && !Keywords.IsReserved(found.Text))
-            return $"'{found.Text}' does not start a statement; expected a keyword such as coil, turns, pitch or let, or a phase current 'U = ...'";
-        if (found.Kind == TokenKind.Bad)
-            return $"the character '{found.Text}' is not part of the language";
-        var expected = error.Expected
-            .Select(e => e.Label ?? (e.Tokens.IsDefaultOrEmpty ? null : string.Join(" ", e.Tokens.Select(t => t.ToString()))))
-            .Where(l => !string.IsNullOrEmpty(l))
-            .Distinct()
-            .Take(6)
-            .ToList();
-        string expectedText = expected.Count switch
-        {
-            0 => "something else",
-            1 => expected[0]!,
-            _ => string.Join(", ", expected.Take(expected.Count - 1)) + " or " + expected[^1],
-        };
-        string after = at > statementStart ? $" after '{tokens[at - 1].Text}'" : "";
-        return found.Kind is TokenKind.NewLine or TokenKind.End
-            ? $"expected {expectedText}{after}"
-            : $"expected {expectedText}{after}, but found {found}";
-    }
+    private static string[] ExpectedLabels(ParseError<Token> error) => error.Expected
+        .Select(e => e.Label ?? (e.Tokens.IsDefaultOrEmpty ? null : string.Join(" ", e.Tokens.Select(t => t.ToString()))))
+        .Where(l => !string.IsNullOrEmpty(l))
+        .Distinct()
+        .ToArray()!;
 }

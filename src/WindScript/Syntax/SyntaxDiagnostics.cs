@@ -2,7 +2,7 @@ using WindScript.Diagnostics;
 
 namespace WindScript.Syntax;
 
-/// <summary>Gathers the diagnostics the parser left in the tree (error statements, unclosed blocks).</summary>
+/// <summary>Gathers the diagnostics the parser left in the tree (error statements, unnamed and unclosed blocks), with their messages.</summary>
 internal static class SyntaxDiagnostics
 {
     public static IReadOnlyList<Diagnostic> Collect(CompilationUnitSyntax root)
@@ -19,18 +19,22 @@ internal static class SyntaxDiagnostics
             switch (statement)
             {
                 case ErrorStatementSyntax error:
-                    bag.Add(DiagnosticCatalog.SyntaxError, error.ErrorSpan, error.Message);
+                    bag.Add(DiagnosticCatalog.SyntaxError, error.ErrorSpan, SyntaxErrorMessages.Describe(error));
                     break;
                 case BlockSyntax block:
+                    if (block.Name.IsMissing)
+                        bag.Add(DiagnosticCatalog.MissingBlockName, block.Name.Span,
+                            $"this {block.Keyword.Text} block has no name: write one between '{block.Keyword.Text}' and '{{'");
                     Visit(block.Body, bag);
                     if (!block.Closed)
-                        bag.Add(DiagnosticCatalog.UnclosedBlock, block.Keyword.Span,
-                            $"the {block.Keyword.Text} block '{block.Name?.Text}' has no closing '}}'");
+                        bag.Add(DiagnosticCatalog.UnclosedBlock, block.Keyword.Span, block.Name.IsMissing
+                            ? $"this {block.Keyword.Text} block has no closing '}}'"
+                            : $"the {block.Keyword.Text} block '{block.Name.Text}' has no closing '}}'");
                     break;
                 case ForSyntax loop:
                     Visit(loop.Body, bag);
                     if (!loop.Closed)
-                        bag.Add(DiagnosticCatalog.UnclosedBlock, loop.Span with { Length = 3 }, "this 'for' loop has no closing '}'");
+                        bag.Add(DiagnosticCatalog.UnclosedBlock, loop.Keyword.Span, "this 'for' loop has no closing '}'");
                     break;
             }
         }

@@ -19,7 +19,9 @@ public static class SyntaxNavigation
             case PropertySyntax p: return [p.Keyword, p.Value];
             case PhasesSyntax p: return [p.Keyword, .. p.Names];
             case FlagSyntax f: return [f.Keyword];
-            case CoilSyntax c: return Present(c.Phase, c.Go, c.Return, c.Turns, c.Layer);
+            case CoilSyntax c: return Present(c.Phase, c.Go, c.Return).Concat(c.Options);
+            case CoilTurnsSyntax t: return [t.Keyword, t.Value];
+            case CoilLayerSyntax l: return [l.Keyword, l.Layer];
             case PatternSyntax p: return [p.Layer, .. p.Entries, .. Present(p.Repeat)];
             case PatternEntrySyntax e: return Present(e.Phase);
             case PhaseCurrentSyntax c: return [c.Phase, .. c.Terms];

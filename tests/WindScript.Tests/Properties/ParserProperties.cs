@@ -46,12 +46,14 @@ public class ParserProperties
 
     private static IEnumerable<SyntaxNode> Children(SyntaxNode node) => node switch
     {
-        BlockSyntax b => b.Body.Cast<SyntaxNode>().Prepend(b.Keyword).Concat(b.Name is null ? [] : [b.Name]),
+        BlockSyntax b => b.Body.Cast<SyntaxNode>().Prepend(b.Keyword).Concat([b.Name]),
         ForSyntax f => f.Body.Cast<SyntaxNode>().Concat([f.Variable, f.From, f.To]).Concat(f.Step is null ? [] : [f.Step]),
         LetSyntax l => [l.Name, l.Value],
         PropertySyntax p => [p.Keyword, p.Value],
         PhasesSyntax p => p.Names,
-        CoilSyntax c => new SyntaxNode?[] { c.Phase, c.Go, c.Return, c.Turns, c.Layer }.OfType<SyntaxNode>(),
+        CoilSyntax c => new SyntaxNode[] { c.Keyword, c.Phase, c.Go, c.Return }.Concat(c.Options),
+        CoilTurnsSyntax t => [t.Keyword, t.Value],
+        CoilLayerSyntax l => [l.Keyword, l.Layer],
         PatternSyntax p => p.Entries.Cast<SyntaxNode>().Prepend(p.Layer).Concat(p.Repeat is null ? [] : [p.Repeat]),
         PhaseCurrentSyntax c => c.Terms.Cast<SyntaxNode>().Prepend(c.Phase),
         SignedTermSyntax s => [s.Term],
