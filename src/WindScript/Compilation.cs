@@ -20,22 +20,26 @@ public sealed class Compilation
         Diagnostics = diagnostics;
     }
 
-    public SyntaxTree Syntax { get; }
+    internal SyntaxTree Syntax { get; }
 
+    /// <summary>The source text, with line starts for offset and line/column conversion.</summary>
     public SourceText Source => Syntax.Source;
 
     /// <summary>The evaluated machine and winding, or null if the file lacks what one needs.</summary>
     public WindingDesign? Design { get; }
 
-    public SemanticModel Semantics { get; }
+    internal SemanticModel Semantics { get; }
 
     /// <summary>Every diagnostic, in source order.</summary>
     public IReadOnlyList<Diagnostic> Diagnostics { get; }
 
+    /// <summary>True if any diagnostic is an error.</summary>
     public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
 
+    /// <summary>Compiles source text; <paramref name="path"/> names the file in diagnostics.</summary>
     public static Compilation Compile(string text, string path = "") => Compile(new SourceText(text, path));
 
+    /// <summary>Compiles a source text: parse, bind, evaluate and check.</summary>
     public static Compilation Compile(SourceText source)
     {
         var syntax = SyntaxTree.Parse(source);

@@ -10,7 +10,7 @@ namespace WindScript.Checking;
 /// stage judges a whole winding, so it runs only if the stages before it found no error: a
 /// dropped or doubled coil would otherwise make every later figure look wrong too.
 /// </summary>
-public static class Checker
+internal static class Checker
 {
     public static IReadOnlyList<Diagnostic> Check(WindingDesign design, SyntaxTree? syntax = null, bool sourceHasErrors = false)
     {

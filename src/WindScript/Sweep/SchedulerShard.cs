@@ -16,7 +16,7 @@ namespace WindScript.Sweep;
 /// (a stepped or sparse array does not give a contiguous 1..N). Anything else (a CI matrix): the
 /// job sets WINDSCRIPT_SHARD = K/N, so the command is the same on every scheduler.
 /// </remarks>
-public static class SchedulerShard
+internal static class SchedulerShard
 {
     public const string Kubernetes = "JOB_COMPLETION_INDEX";
     public const string SlurmId = "SLURM_ARRAY_TASK_ID", SlurmMin = "SLURM_ARRAY_TASK_MIN", SlurmMax = "SLURM_ARRAY_TASK_MAX", SlurmCount = "SLURM_ARRAY_TASK_COUNT";
@@ -29,6 +29,7 @@ public static class SchedulerShard
     /// <summary>The shard and where it came from, or null with a usage message.</summary>
     /// <param name="environment">Looks a variable up; null when it is not set.</param>
     /// <param name="shards">N from <c>--shards</c>, when given.</param>
+    /// <param name="error">Why no shard could be taken from the environment (null on success).</param>
     public static (SweepShard Shard, string Source)? Resolve(Func<string, string?> environment, int? shards, out string? error)
     {
         error = null;

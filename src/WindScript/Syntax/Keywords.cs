@@ -1,7 +1,7 @@
 namespace WindScript.Syntax;
 
 /// <summary>The words the language reserves, by role. A reserved word cannot name anything.</summary>
-public static class Keywords
+internal static class Keywords
 {
     /// <summary>Blocks: their bodies hold statements.</summary>
     public static readonly IReadOnlySet<string> Blocks = new HashSet<string> { "machine", "winding", "group", "drive" };

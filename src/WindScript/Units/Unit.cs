@@ -1,4 +1,4 @@
 namespace WindScript.Units;
 
 /// <summary>A unit symbol as written in source, its dimension, and its factor to SI (rad for angles).</summary>
-public sealed record Unit(string Symbol, Dimension Dimension, double ToSi);
+internal sealed record Unit(string Symbol, Dimension Dimension, double ToSi);
