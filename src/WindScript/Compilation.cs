@@ -48,7 +48,9 @@ public sealed class Compilation
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)
-            all.AddRange(Checking.Checker.Check(design, syntax, sourceHasErrors: all.Any(d => d.Severity == Severity.Error)));
+            // An error inside a drive cannot change the winding: it does not hold the winding checks back.
+            all.AddRange(Checking.Checker.Check(design, syntax,
+                sourceHasErrors: all.Any(d => d.Severity == Severity.Error && !design.Drives.Any(drive => drive.Span.Contains(d.Span)))));
         all.Sort((a, b) => a.Span.Start != b.Span.Start ? a.Span.Start.CompareTo(b.Span.Start) : string.CompareOrdinal(a.Code, b.Code));
         return new Compilation(syntax, semantics, all);
     }

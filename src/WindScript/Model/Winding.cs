@@ -41,4 +41,5 @@ public sealed record Winding
     public TextSpan ConductorsPerSlotSpan { get; init; }
     /// <summary>Where <c>layers</c> is written (empty if it is not).</summary>
     public TextSpan LayersSpan { get; init; }
+    public TextSpan PitchSpan { get; init; }
 }

@@ -75,6 +75,7 @@ internal sealed class WindingBinder(
             SeriesTurnsSpan = seriesSpan,
             ConductorsPerSlotSpan = conductorsSpan,
             LayersSpan = layersSpan,
+            PitchSpan = pitchSpan,
         };
     }
 
