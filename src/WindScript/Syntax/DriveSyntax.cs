@@ -10,7 +10,10 @@ public sealed record DcTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Curren
 
 /// <summary><c>sine 12 A rms at 50 Hz phase -30 deg</c>: i = Î·cos(ωt + φ).</summary>
 public sealed record SineTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Amplitude, KeywordSyntax Measure, ExpressionSyntax Frequency, ExpressionSyntax? Phase, TextSpan Span)
-    : WaveTermSyntax(Span);
+    : WaveTermSyntax(Span)
+{
+    public AmplitudeMeasure MeasureKind => Vocabulary.Measure(Measure.Text)!.Measure;
+}
 
 /// <summary>A term with the sign it is added with.</summary>
 public sealed record SignedTermSyntax(bool Negated, WaveTermSyntax Term, TextSpan Span) : SyntaxNode(Span);
