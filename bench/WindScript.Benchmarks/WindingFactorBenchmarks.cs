@@ -74,7 +74,7 @@ public class WindingFactorBenchmarks
         var coils = Enumerable.Range(0, Slots).Select(s =>
         {
             var (phase, sign) = belts[s / 4 % 6];
-            return new Coil(phase, s + 1, (s + 10) % Slots + 1, 0, 1, 8, sign);
+            return new Coil { Phase = phase, GoSlot = s + 1, ReturnSlot = (s + 10) % Slots + 1, GoLayer = 0, ReturnLayer = 1, Turns = 8, Polarity = sign };
         });
         return new WindingDesign
         {

@@ -88,7 +88,7 @@ public static class PipelineProgram
     {
         string[] phases = ["U", "V", "W"];
         var coils = pattern.Split(' ', StringSplitOptions.RemoveEmptyEntries).Select((entry, s) =>
-            new Coil(Array.IndexOf(phases, entry.TrimStart('-')), s + 1, (s + 1) % slots + 1, 0, 1, turns, entry.StartsWith('-') ? -1 : 1));
+            new Coil { Phase = Array.IndexOf(phases, entry.TrimStart('-')), GoSlot = s + 1, ReturnSlot = (s + 1) % slots + 1, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = entry.StartsWith('-') ? -1 : 1 });
         return new WindingDesign
         {
             Name = name,

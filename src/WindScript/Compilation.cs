@@ -20,22 +20,26 @@ public sealed class Compilation
         Diagnostics = diagnostics;
     }
 
-    public SyntaxTree Syntax { get; }
+    internal SyntaxTree Syntax { get; }
 
+    /// <summary>The source text, with line starts for offset and line/column conversion.</summary>
     public SourceText Source => Syntax.Source;
 
     /// <summary>The evaluated machine and winding, or null if the file lacks what one needs.</summary>
     public WindingDesign? Design { get; }
 
-    public SemanticModel Semantics { get; }
+    internal SemanticModel Semantics { get; }
 
     /// <summary>Every diagnostic, in source order.</summary>
     public IReadOnlyList<Diagnostic> Diagnostics { get; }
 
+    /// <summary>True if any diagnostic is an error.</summary>
     public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
 
+    /// <summary>Compiles source text; <paramref name="path"/> names the file in diagnostics.</summary>
     public static Compilation Compile(string text, string path = "") => Compile(new SourceText(text, path));
 
+    /// <summary>Compiles a source text: parse, bind, evaluate and check.</summary>
     public static Compilation Compile(SourceText source)
     {
         var syntax = SyntaxTree.Parse(source);
@@ -44,7 +48,9 @@ public sealed class Compilation
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)
-            all.AddRange(Checking.Checker.Check(design, syntax, sourceHasErrors: all.Any(d => d.Severity == Severity.Error)));
+            // An error inside a drive cannot change the winding: it does not hold the winding checks back.
+            all.AddRange(Checking.Checker.Check(design, syntax,
+                sourceHasErrors: all.Any(d => d.Severity == Severity.Error && !design.Drives.Any(drive => drive.Span.Contains(d.Span)))));
         all.Sort((a, b) => a.Span.Start != b.Span.Start ? a.Span.Start.CompareTo(b.Span.Start) : string.CompareOrdinal(a.Code, b.Code));
         return new Compilation(syntax, semantics, all);
     }

@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using WindScript.Cli.Output;
 using WindScript.Diagnostics;
 using WindScript.Model;

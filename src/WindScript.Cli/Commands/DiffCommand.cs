@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using WindScript.Cli.Output;
 using WindScript.Review;
@@ -46,6 +47,11 @@ public static class DiffCommand
             default:
                 io.Err.WriteLine($"windscript diff: expected two files (OLD NEW) or git's 7 external-diff arguments, got {args.Length}");
                 return ExitCodes.Usage;
+        }
+        if (oldPath == "-" && newPath == "-")
+        {
+            io.Err.WriteLine("windscript diff: standard input can be read only once: give at most one side as '-'");
+            return ExitCodes.Usage;
         }
         if (Read(io, oldPath, oldLabel) is not { } old || Read(io, newPath, newLabel) is not { } @new) return ExitCodes.Usage;
         var diff = WindingComparison.Compare(old, @new);

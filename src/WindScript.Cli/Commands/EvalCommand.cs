@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using System.Globalization;
 using WindScript.Analysis;
@@ -18,10 +19,7 @@ public static class EvalCommand
             Description = "Highest electrical order shown (harmonics n = v/p up to N)",
             DefaultValueFactory = _ => 25,
         };
-        orders.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<int>() is < 1 or > 10_000) r.AddError("--orders must be between 1 and 10000");
-        });
+        UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
         var at = new Option<string>("--at")
         {
             Description = "Instant for the MMF and field: seconds, or with a unit (s, ms, us), e.g. 2.5ms",
@@ -29,7 +27,7 @@ public static class EvalCommand
         };
         at.Validators.Add(r =>
         {
-            if (ParseTime(r.GetValueOrDefault<string>()) is null) r.AddError($"--at: '{r.GetValueOrDefault<string>()}' is not a time (e.g. 0, 0.004, 2.5ms)");
+            if (ParseTime(r.GetValueOrDefault<string>()) is null) r.AddError($"--at: '{r.GetValueOrDefault<string>()}' is not a time within ±1e6 s (e.g. 0, 0.004, 2.5ms)");
         });
         var command = new Command("eval", "Evaluate a winding: winding factors, MMF harmonics and rotating waves, air-gap field, leakage, inductances")
         {
@@ -68,6 +66,9 @@ public static class EvalCommand
         return compilation.Diagnostics.Any(d => d.Severity == Severity.Error) ? ExitCodes.Findings : ExitCodes.Ok;
     }
 
+    /// <summary>The largest |--at| accepted, in seconds.</summary>
+    public const double MaxTimeSeconds = 1e6;
+
     /// <summary>A time in seconds from "0.004", "4ms", "2.5 ms", "250us" or "1s"; null if it is not one.</summary>
     public static double? ParseTime(string? text)
     {
@@ -77,6 +78,7 @@ public static class EvalCommand
         double scale = 1;
         foreach (var (suffix, factor) in units)
             if (text.EndsWith(suffix, StringComparison.OrdinalIgnoreCase)) { text = text[..^suffix.Length].TrimEnd(); scale = factor; break; }
-        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v) ? v * scale : null;
+        // Beyond a million seconds the phase angle w*t has no digits left (and overflows at 1e308).
+        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && Math.Abs(v * scale) <= MaxTimeSeconds ? v * scale : null;
     }
 }

@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using WindScript.Cli.Output;
 using WindScript.Formatting;
@@ -50,7 +51,9 @@ public static class FmtCommand
                 io.Out.Write(formatted);
                 continue;
             }
-            if (formatted != file.Text) AtomicFile.WriteAllText(file.Path, formatted);
+            // The file is its own input: replacing it is the point, so it is not passed as an input to protect.
+            if (formatted != file.Text)
+                exit = Math.Max(exit, OutputWriting.Write(io, "fmt", file.Path, () => OutputFile.WriteAllText(file.Path, formatted)));
         }
         return exit;
     }

@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using WindScript.Analysis;
 using WindScript.Reporting.Drawing;
@@ -29,7 +30,7 @@ public static class PlotCommand
         string extension = Path.GetExtension(output).ToLowerInvariant();
         if (extension is not (".svg" or ".png"))
         {
-            io.Err.WriteLine($"windscript plot: the output must end in .svg or .png, not '{output}'");
+            io.Err.WriteLine($"windscript plot: --output must end in .svg or .png, not '{output}'");
             return ExitCodes.Usage;
         }
         var kind = Plotter.Parse(kindName)!.Value;
@@ -38,26 +39,20 @@ public static class PlotCommand
         var design = loaded.Design;
         if (Excitation.Resolve(design, driveName) is not { } excitation)
         {
-            io.Err.WriteLine($"windscript plot: no drive named '{driveName}' (the file has: {(design.Drives.IsEmpty ? "none" : string.Join(", ", design.Drives.Select(d => d.Name)))})");
+            io.Err.WriteLine($"windscript plot: --drive: no drive named '{driveName}' (the file has: {(design.Drives.IsEmpty ? "none" : string.Join(", ", design.Drives.Select(d => d.Name)))})");
             return ExitCodes.Usage;
         }
         if (!TimeValue.TryParse(at, excitation.PeriodSeconds, out double time, out string error))
         {
-            io.Err.WriteLine($"windscript plot: {error}");
+            io.Err.WriteLine($"windscript plot: --at: {error}");
             return ExitCodes.Usage;
         }
         var gap = MachineAnalysis.Evaluate(design).Gap;
         var scene = Plotter.Draw(kind, excitation, gap, time);
-        try
+        return OutputWriting.Write(io, "plot --output", output, () =>
         {
-            if (extension == ".svg") AtomicFile.WriteAllText(output, SvgRenderer.Render(scene));
-            else AtomicFile.WriteAllBytes(output, PngRenderer.Render(scene));
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            io.Err.WriteLine($"windscript plot: cannot write '{output}': {e.Message}");
-            return ExitCodes.Usage;
-        }
-        return ExitCodes.Ok;
+            if (extension == ".svg") OutputFile.WriteAllText(output, SvgRenderer.Render(scene), [path]);
+            else OutputFile.WriteAllBytes(output, PngRenderer.Render(scene), [path]);
+        });
     }
 }

@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using WindScript.Reporting.Report;
 
@@ -24,15 +25,6 @@ public static class ReportCommand
         var (loaded, exit) = DesignInput.Load(io, path);
         if (loaded is null) return exit;
         var html = HtmlReport.Render(loaded.Compilation, loaded.File.DisplayName);
-        try
-        {
-            AtomicFile.WriteAllText(output, html);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            io.Err.WriteLine($"windscript report: cannot write '{output}': {e.Message}");
-            return ExitCodes.Usage;
-        }
-        return ExitCodes.Ok;
+        return OutputWriting.Write(io, "report --output", output, () => OutputFile.WriteAllText(output, html, [path]));
     }
 }

@@ -14,6 +14,9 @@ namespace WindScript.Cli.Commands;
 /// </summary>
 public static class SweepCommand
 {
+    /// <summary>More workers than this only costs memory and start-up on any machine we know.</summary>
+    public const int MaxThreads = 256;
+
     /// <summary>The command line as given, before it is checked.</summary>
     public sealed record Arguments(string Slots, string Poles, int Phases, int Layers, string Pitch, int Orders, string Format,
         string? Shard, int? Shards, string? Output, bool SkipExisting, int Threads);
@@ -46,6 +49,11 @@ public static class SweepCommand
         };
         var skipExisting = new Option<bool>("--skip-existing") { Description = "With --output: do nothing if the part's file exists (parts are written whole), so rerunning every task fills in only the missing parts" };
         var threads = new Option<int>("--threads") { Description = "Worker threads (default: one per core)", DefaultValueFactory = _ => Environment.ProcessorCount };
+        UsageMessages.InRange(phases, 2, InputLimits.MaxPhases);
+        UsageMessages.InRange(layers, 1, 2);
+        UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
+        UsageMessages.InRange(threads, 1, MaxThreads);
+        UsageMessages.InRange(shards, 1, 1_000_000);
         var command = new Command("sweep", "Synthesise and evaluate every feasible slot/pole combination in the ranges, one record per layout")
         {
             slots, poles, phases, layers, pitch, orders, format, shard, shards, output, skipExisting, threads,
@@ -59,11 +67,14 @@ public static class SweepCommand
     public static int Run(CliIO io, Arguments a)
     {
         string? error = null;
-        var slotRange = ParseRange(a.Slots, "--slots", ref error);
-        var poleRange = ParseRange(a.Poles, "--poles", ref error);
+        var slotRange = ParseRange(a.Slots, "--slots", 2, InputLimits.MaxSlots, ref error);
+        var poleRange = ParseRange(a.Poles, "--poles", 2, InputLimits.MaxPoles, ref error);
+        if (error is null && poleRange.From == poleRange.To && poleRange.From % 2 != 0) error = $"--poles: the pole count must be even, not {poleRange.From}";
         var rule = error is null ? PitchRule.Parse(a.Pitch, out error) : null;
+        if (error is not null && rule is null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--pitch: " + error;
         var (shard, shardSource) = error is null ? ResolveShard(io, a, ref error) : (SweepShard.Whole, null);
-        if (error is null && a.Threads < 1) error = $"--threads must be at least 1, not {a.Threads}";
+        if (error is not null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--shard: " + error;
+        if (error is null && a.Threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {a.Threads}";
         if (error is null && a.SkipExisting && a.Output is null) error = "--skip-existing needs --output FILE";
         SweepSpec? spec = null;
         if (error is null)
@@ -93,7 +104,7 @@ public static class SweepCommand
         try { part = path is null ? null : new PartFile(path); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            io.Err.WriteLine($"windscript sweep: cannot write {path}: {e.Message}");
+            io.Err.WriteLine($"windscript sweep: cannot write --output '{path}': {IoFailure.Describe(e)}");
             return ExitCodes.Usage;
         }
         using (part)
@@ -145,14 +156,18 @@ public static class SweepCommand
         return (shard, null);
     }
 
-    private static (int From, int To) ParseRange(string text, string option, ref string? error)
+    private static (int From, int To) ParseRange(string text, string option, int min, int max, ref string? error)
     {
         if (error is not null) return (0, 0);
         var parts = text.Split("..");
         if (parts.Length is 1 or 2
             && int.TryParse(parts[0], NumberStyles.None, CultureInfo.InvariantCulture, out int from)
             && int.TryParse(parts[^1], NumberStyles.None, CultureInfo.InvariantCulture, out int to))
+        {
+            if (from < min || to > max) error = $"{option} must lie within {min}..{max}, not {text}";
+            else if (to < from) error = $"{option}: the range {text} is empty";
             return (from, to);
+        }
         error = $"{option} takes a range A..B or one whole number, not '{text}'";
         return (0, 0);
     }

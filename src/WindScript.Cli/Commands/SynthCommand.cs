@@ -1,3 +1,4 @@
+using WindScript.Cli.Files;
 using System.CommandLine;
 using WindScript.Cli.Output;
 using WindScript.Emit;
@@ -23,6 +24,17 @@ public static class SynthCommand
         var paths = new Option<int>("--paths", "-a") { Description = "Parallel paths per phase", DefaultValueFactory = _ => 1 };
         var name = new Option<string?>("--name") { Description = "Machine name (default slots{Q}_poles{2P})" };
         var output = new Option<string?>("--output", "-o") { Description = "Write the file here (replaced only when complete) instead of standard output" };
+        UsageMessages.InRange(slots, 2, InputLimits.MaxSlots);
+        UsageMessages.InRange(poles, 2, InputLimits.MaxPoles);
+        poles.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && int.TryParse(r.Tokens[0].Value, out int p) && p % 2 != 0) r.AddError($"--poles must be even, not {p}");
+        });
+        UsageMessages.InRange(phases, 2, InputLimits.MaxPhases);
+        UsageMessages.InRange(layers, 1, 2);
+        UsageMessages.InRange(pitch, 1, InputLimits.MaxSlots - 1);
+        UsageMessages.InRange(turns, 1, InputLimits.MaxTurns);
+        UsageMessages.InRange(paths, 1, InputLimits.MaxPaths);
         var command = new Command("synth", "Synthesise a balanced winding by the star of slots and print it as a .wind file")
         {
             slots, poles, phases, layers, pitch, turns, paths, name, output,
@@ -43,6 +55,11 @@ public static class SynthCommand
 
     public static int Run(CliIO io, SynthesisRequest request, string? outputPath = null)
     {
+        if (request.Pitch is { } pitch && pitch >= request.Slots)
+        {
+            io.Err.WriteLine($"windscript synth: --pitch must be below the slot count {request.Slots}, not {pitch}");
+            return ExitCodes.Usage;
+        }
         if (request.Problem() is { } problem)
         {
             io.Err.WriteLine($"windscript synth: {problem}");
@@ -50,7 +67,7 @@ public static class SynthCommand
         }
         if (request.MachineName is { } name && !IsName(name))
         {
-            io.Err.WriteLine($"windscript synth: '{name}' is not a name the language accepts (letters, digits and '_', not starting with a digit, not a keyword)");
+            io.Err.WriteLine($"windscript synth: --name: '{name}' is not a name the language accepts (letters, digits and '_', not starting with a digit, not a keyword)");
             return ExitCodes.Usage;
         }
         var result = WindingSynthesizer.Synthesize(request);
@@ -60,9 +77,12 @@ public static class SynthCommand
             return ExitCodes.Findings;
         }
         var text = WindEmitter.Emit(design, new EmitOptions { Header = SynthesisHeader.Lines(result) });
-        if (outputPath is null) io.Out.Write(text);
-        else AtomicFile.WriteAllText(outputPath, text);
-        return ExitCodes.Ok;
+        if (outputPath is null)
+        {
+            io.Out.Write(text);
+            return ExitCodes.Ok;
+        }
+        return OutputWriting.Write(io, "synth --output", outputPath, () => OutputFile.WriteAllText(outputPath, text));
     }
 
     private static bool IsName(string name) =>

@@ -27,6 +27,18 @@ public static class DiagnosticJson
         json.WriteString("severity", DiagnosticText.SeverityName(d.Severity));
         json.WriteString("code", d.Code);
         json.WriteString("message", d.Message);
+        if (d.Related.Count > 0)
+        {
+            json.WriteStartArray("related");
+            foreach (var related in d.Related)
+            {
+                json.WriteStartObject();
+                WriteRange(json, source, related.Span);
+                json.WriteString("message", related.Message);
+                json.WriteEndObject();
+            }
+            json.WriteEndArray();
+        }
         if (d.Fix is { } fix)
         {
             json.WriteStartObject("fix");
@@ -48,6 +60,16 @@ public static class DiagnosticJson
             json.WriteEndObject();
         }
         json.WriteEndObject();
+    }
+
+    private static void WriteRange(Utf8JsonWriter json, SourceText source, TextSpan span)
+    {
+        var s = source.GetPosition(span.Start);
+        var e = source.GetPosition(span.End);
+        json.WriteNumber("line", s.Line + 1);
+        json.WriteNumber("column", s.Character + 1);
+        json.WriteNumber("endLine", e.Line + 1);
+        json.WriteNumber("endColumn", e.Character + 1);
     }
 
     /// <summary>Runs <paramref name="write"/> on an indented writer and returns the JSON text.</summary>

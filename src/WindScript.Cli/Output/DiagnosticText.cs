@@ -19,6 +19,12 @@ public static class DiagnosticText
         {
             var pos = source.GetPosition(d.Span.Start);
             output.WriteLine($"{file}({pos.Line + 1},{pos.Character + 1}): {SeverityName(d.Severity)} {d.Code}: {d.Message}");
+            // Related places, indented under their diagnostic in the form editors link.
+            foreach (var related in d.Related)
+            {
+                var at = source.GetPosition(related.Span.Start);
+                output.WriteLine($"  {file}({at.Line + 1},{at.Character + 1}): note: {related.Message}");
+            }
         }
     }
 }

@@ -196,7 +196,7 @@ public static class Completion
     }
 
     /// <summary>Values and loop variables defined above the cursor in a block that encloses it.</summary>
-    public static IEnumerable<Symbol> NamesInScope(Compilation c, int offset)
+    internal static IEnumerable<Symbol> NamesInScope(Compilation c, int offset)
     {
         var root = c.Syntax.Root;
         var seen = new HashSet<string>(StringComparer.Ordinal);

@@ -25,28 +25,28 @@ public sealed class CompletionContext
     public string Block => Blocks.Count > 0 ? Blocks[^1] : "";
 
     /// <summary>The tokens of the current statement before the cursor, without the word being typed.</summary>
-    public IReadOnlyList<Token> Statement { get; }
+    internal IReadOnlyList<Token> Statement { get; }
 
     /// <summary>The word (or unit) the cursor is in or just after, if any.</summary>
-    public Token? Partial { get; }
+    internal Token? Partial { get; }
 
     public bool InComment { get; }
 
     public bool AtStatementStart => Statement.Count == 0;
 
-    public Token? Last => Statement.Count > 0 ? Statement[^1] : null;
+    internal Token? Last => Statement.Count > 0 ? Statement[^1] : null;
 
     public string First => Statement.Count > 0 ? Statement[0].Text : "";
 
     public bool Has(string word) => Statement.Any(t => t.Kind == TokenKind.Word && t.Text == word);
 
-    public bool Has(TokenKind kind) => Statement.Any(t => t.Kind == kind);
+    internal bool Has(TokenKind kind) => Statement.Any(t => t.Kind == kind);
 
     /// <summary>The last reserved word of the statement, or "" if none.</summary>
     public string LastKeyword(params string[] among) =>
         Statement.LastOrDefault(t => t.Kind == TokenKind.Word && among.Contains(t.Text)).Text ?? "";
 
-    public static CompletionContext At(SyntaxTree tree, int offset)
+    internal static CompletionContext At(SyntaxTree tree, int offset)
     {
         bool inComment = tree.Comments.Any(c => c.Span.Start < offset && offset <= c.Span.End);
         var tokens = tree.Tokens;

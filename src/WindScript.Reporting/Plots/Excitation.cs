@@ -28,7 +28,7 @@ public sealed class Excitation
     public WindingDesign Design { get; }
     public Drive Drive { get; }
     public bool IsSynthetic { get; }
-    public WindingSpectrum Spectrum { get; }
+    internal WindingSpectrum Spectrum { get; }
 
     /// <summary>One period of the lowest current frequency; null for direct current (a standing field).</summary>
     public double? PeriodSeconds { get; }
@@ -65,7 +65,7 @@ public sealed class Excitation
     public Complex Harmonic(double time, int order) => MmfStaircase.Harmonic(Spectrum, CurrentsAt(time), order);
 
     /// <summary>The current groups (one per frequency), strongest first.</summary>
-    public IReadOnlyList<CurrentPhasors> Groups =>
+    internal IReadOnlyList<CurrentPhasors> Groups =>
         [.. CurrentPhasors.Of(Drive, Design.Phases.Length).OrderByDescending(g => g.Phasors.Sum(p => p.Magnitude))];
 
     /// <summary>"t = 2.5 ms" (or "DC").</summary>

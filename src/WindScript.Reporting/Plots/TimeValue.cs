@@ -12,7 +12,18 @@ public static partial class TimeValue
     [GeneratedRegex(@"^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*([a-zµ]*)\s*$")]
     private static partial Regex Pattern();
 
+    /// <summary>The largest |time| accepted, in seconds: beyond it the phase angle w*t has no digits left.</summary>
+    public const double MaxSeconds = 1e6;
+
     public static bool TryParse(string text, double? periodSeconds, out double seconds, out string error)
+    {
+        if (!TryParseUnbounded(text, periodSeconds, out seconds, out error)) return false;
+        if (Math.Abs(seconds) <= MaxSeconds) return true;
+        error = $"the time '{text}' is outside ±{MaxSeconds:0e0} s";
+        return false;
+    }
+
+    private static bool TryParseUnbounded(string text, double? periodSeconds, out double seconds, out string error)
     {
         seconds = 0;
         error = "";

@@ -9,7 +9,7 @@ namespace WindScript.Analysis;
 /// highest at the rotor surface, lowest at the bore, and equal to the constant-field value
 /// μ0·F/δ at the logarithmic mean radius δ/ln(r_s/r_r).
 /// </summary>
-public static class AirGapField
+internal static class AirGapField
 {
     /// <summary>Permeability of vacuum, 4π·10⁻⁷ H/m (the SI 2019 value differs in the 10th digit).</summary>
     public const double Mu0 = 4e-7 * Math.PI;

@@ -6,7 +6,7 @@ namespace WindScript.Analysis;
 /// bore), and E_rms = (2π/√2)·f·k_w1·N_s·Φ (common practice; Pyrhonen et al., ch. 2), with the
 /// fundamental winding factor k_w1 including skew and N_s the series turns per phase.
 /// </summary>
-public static class BackEmf
+internal static class BackEmf
 {
     /// <summary>Fundamental flux per pole (Wb).</summary>
     public static double FluxPerPole(double peakFluxDensity, double boreRadius, double stackLength, int polePairs) =>

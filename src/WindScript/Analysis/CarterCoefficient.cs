@@ -6,7 +6,7 @@ namespace WindScript.Analysis;
 /// k_C = τ_s / (τ_s − κ·b), κ = (2/π)·[atan(b/2δ) − (2δ/b)·ln √(1 + (b/2δ)²)],
 /// with τ_s the slot pitch at the bore, b the slot opening and δ the gap. The effective gap is k_C·δ.
 /// </summary>
-public static class CarterCoefficient
+internal static class CarterCoefficient
 {
     public static double Compute(double slotPitch, double slotOpening, double gap)
     {

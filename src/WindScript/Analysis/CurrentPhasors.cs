@@ -8,7 +8,7 @@ namespace WindScript.Analysis;
 /// The currents of a drive at one angular frequency ω ≥ 0, as one phasor per phase:
 /// i_k(t) = Re(I_k e^(jωt)). Direct current is ω = 0 with real phasors.
 /// </summary>
-public sealed record CurrentPhasors(double Omega, ImmutableArray<Complex> Phasors)
+internal sealed record CurrentPhasors(double Omega, ImmutableArray<Complex> Phasors)
 {
     public double FrequencyHz => Omega / (2 * Math.PI);
 

@@ -9,7 +9,7 @@ namespace WindScript.Analysis;
 /// gap radius r, the stack length l and the effective gap g_e = k_C·δ. The integral of two
 /// staircases is an exact finite sum over the slot intervals, so every harmonic is included.
 /// </summary>
-public static class Inductances
+internal static class Inductances
 {
     /// <summary>∫ N_k N_l dθ for every pair (H·m/μ0 units: turns²·rad), exact.</summary>
     public static double[,] TurnsProducts(WindingSpectrum winding)

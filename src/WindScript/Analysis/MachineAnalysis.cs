@@ -29,6 +29,7 @@ public static class MachineAnalysis
     /// <summary>Electrical order n = ν/p (0 for a design without poles, which the checker reports).</summary>
     public static double ElectricalOrder(int order, int polePairs) => polePairs <= 0 ? 0 : (double)order / polePairs;
 
+    /// <summary>Evaluates every figure of a design (options: highest order and instant; defaults when null).</summary>
     public static AnalysisResult Evaluate(WindingDesign design, AnalysisOptions? options = null)
     {
         options ??= new AnalysisOptions();
@@ -88,7 +89,7 @@ public static class MachineAnalysis
     /// The waves balanced unit currents make, orders 1..<paramref name="maxOrder"/> (mechanical),
     /// relative to the working wave, with the sub-, even and inter-harmonic orders among them.
     /// </summary>
-    public static BalancedSpectrum BalancedWaves(WindingDesign design, WindingSpectrum winding, int maxOrder)
+    internal static BalancedSpectrum BalancedWaves(WindingDesign design, WindingSpectrum winding, int maxOrder)
     {
         var unit = CurrentPhasors.Balanced(design.Phases.Length, design.PhaseShiftDegrees * Math.PI / 180);
         var (f, b) = TravellingWaves.At(winding, unit.Phasors.AsSpan(), design.PolePairs);

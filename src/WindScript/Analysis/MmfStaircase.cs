@@ -7,7 +7,7 @@ namespace WindScript.Analysis;
 /// The air-gap MMF F(θ, t) = Σ_k N_k(θ)·i_k(t) at one instant: a zero-mean staircase with one
 /// level per slot interval (level i from the centre of slot i to the centre of slot i + 1).
 /// </summary>
-public sealed class MmfStaircase
+internal sealed class MmfStaircase
 {
     private readonly double[] _levels;
 

@@ -11,7 +11,7 @@ namespace WindScript.Analysis;
 /// which follows from Re(a)·Re(b) = ½Re(ab) + ½Re(a·conj(b)). Each wave moves at ω/ν mechanical
 /// rad/s. A DC drive (ω = 0) gives a standing wave of amplitude |F⁺ + F⁻|.
 /// </summary>
-public static class TravellingWaves
+internal static class TravellingWaves
 {
     /// <summary>The complex forward and backward amplitudes (A) of order ν for one set of phasors.</summary>
     public static (Complex Forward, Complex Backward) At(WindingSpectrum winding, ReadOnlySpan<Complex> phasors, int order)

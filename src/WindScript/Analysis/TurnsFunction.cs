@@ -11,7 +11,7 @@ namespace WindScript.Analysis;
 /// magnetic potential of the rotor iron settles where the mean MMF across the gap is zero.
 /// Fourier form: N(θ) = Σ_ν Re(C_ν e^(jνθ)) with C_ν = S(ν) / (jπν), S from <see cref="SlotSpectrum"/>.
 /// </remarks>
-public sealed class TurnsFunction
+internal sealed class TurnsFunction
 {
     private readonly double[] _levels;
 

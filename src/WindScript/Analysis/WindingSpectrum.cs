@@ -11,7 +11,7 @@ namespace WindScript.Analysis;
 /// without making the design mutable. Conductors are divided by the parallel paths, so a phase
 /// current times the turns function is the phase's MMF.
 /// </summary>
-public sealed class WindingSpectrum
+internal sealed class WindingSpectrum
 {
     private readonly Complex[] _baseBands;   // phase-major, BaseBandLength(Q) per phase
     private readonly int _band;

@@ -13,7 +13,7 @@ namespace WindScript.Analysis;
 /// When t_w = 1 and there is no half-period reversal, MMF orders ν and ν + 1 can coexist; their
 /// fields pull the rotor sideways (unbalanced magnetic pull).
 /// </remarks>
-public sealed record WindingSymmetry(int MachinePeriodicity, int WindingPeriodicity, bool HalfPeriodReversal, int CoggingOrder)
+internal sealed record WindingSymmetry(int MachinePeriodicity, int WindingPeriodicity, bool HalfPeriodReversal, int CoggingOrder)
 {
     /// <summary>True when adjacent orders ν, ν + 1 can both appear: a risk of unbalanced magnetic pull.</summary>
     public bool AdjacentOrders => WindingPeriodicity == 1 && !HalfPeriodReversal;

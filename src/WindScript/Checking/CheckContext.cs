@@ -22,10 +22,13 @@ internal sealed class CheckContext(WindingDesign design, SyntaxTree? syntax)
 
     public WindingSymmetry Symmetry => _symmetry ??= WindingSymmetry.Of(Design);
 
-    public int PhaseCount => Design.Phases.Length;
+    /// <summary>Coils a balance error has named as its cause (no second diagnostic points at them).</summary>
+    public HashSet<Coil> Culprits { get; } = new(ReferenceEqualityComparer.Instance);
 
-    /// <summary>True if every phase has at least one coil: the balance checks mean nothing before that.</summary>
-    public bool EveryPhaseWound => Enumerable.Range(0, PhaseCount).All(p => Design.Winding.Coils.Any(c => c.Phase == p));
+    /// <summary>Errors of the source outside the winding checks, computed once when a fix is verified.</summary>
+    public HashSet<string>? OtherErrors { get; set; }
+
+    public int PhaseCount => Design.Phases.Length;
 
     public string PhaseName(int phase) => Design.Phases[phase].Name;
 }

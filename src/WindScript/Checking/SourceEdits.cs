@@ -47,6 +47,31 @@ internal static class SourceEdits
         tree?.Root.Statements.OfType<BlockSyntax>().FirstOrDefault(b => b.Span == blockSpan)?.Body
             .OfType<PropertySyntax>().FirstOrDefault(p => p.Property.Name == property)?.Span;
 
+    /// <summary>The 'coil' statement written at <paramref name="span"/>, if any.</summary>
+    public static CoilSyntax? FindCoil(SyntaxTree tree, TextSpan span) => Find<CoilSyntax>(tree.Root.Statements, span);
+
+    /// <summary>The slot-pattern entry written at <paramref name="span"/>, if any.</summary>
+    public static PatternEntrySyntax? FindEntry(SyntaxTree tree, TextSpan span) => FindEntry(tree.Root.Statements, span);
+
+    /// <summary>The two entries a single-layer pattern coil spans: its go entry starts the span and its return entry ends it.</summary>
+    public static (PatternEntrySyntax Go, PatternEntrySyntax Return)? FindEntryPair(SyntaxTree tree, TextSpan span)
+    {
+        var entries = Patterns(tree.Root.Statements).SelectMany(p => p.Entries).ToArray();
+        var go = entries.FirstOrDefault(e => e.Span.Start == span.Start);
+        var ret = entries.FirstOrDefault(e => e.Span.End == span.End);
+        return go is null || ret is null || ReferenceEquals(go, ret) ? null : (go, ret);
+    }
+
+    private static IEnumerable<PatternSyntax> Patterns(IEnumerable<StatementSyntax> statements)
+    {
+        foreach (var s in statements)
+        {
+            if (s is PatternSyntax p) yield return p;
+            var body = s switch { BlockSyntax b => b.Body, ForSyntax f => f.Body, _ => null };
+            if (body is not null) foreach (var inner in Patterns(body)) yield return inner;
+        }
+    }
+
     private static PatternEntrySyntax? FindEntry(IEnumerable<StatementSyntax> statements, TextSpan span)
     {
         foreach (var s in statements)

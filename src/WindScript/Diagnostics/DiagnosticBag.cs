@@ -3,7 +3,7 @@ using WindScript.Text;
 namespace WindScript.Diagnostics;
 
 /// <summary>Collects diagnostics in the order they are found.</summary>
-public sealed class DiagnosticBag
+internal sealed class DiagnosticBag
 {
     private readonly List<Diagnostic> _items = [];
 

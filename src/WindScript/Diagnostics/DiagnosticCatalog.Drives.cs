@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor SequenceAgainstWinding = new(
         "WS4001", Severity.Warning, "Drive sequence runs against the winding",

@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor GapTooLarge = new(
         "WS5001", Severity.Error, "Air gap not smaller than the bore radius",

@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor RepeatedCoilOption = new(
         "WS2020", Severity.Error, "Coil option given twice",

@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor SyntaxError = new(
         "WS1001", Severity.Error, "Syntax error",

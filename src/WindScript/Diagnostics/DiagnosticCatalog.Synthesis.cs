@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor NoBalancedWinding = new(
         "WS6001", Severity.Error, "No balanced winding for these slot, pole and phase counts",

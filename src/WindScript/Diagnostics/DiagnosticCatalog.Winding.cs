@@ -1,6 +1,6 @@
 namespace WindScript.Diagnostics;
 
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     public static readonly DiagnosticDescriptor SlotOutOfRange = new(
         "WS3001", Severity.Error, "Slot number out of range",
@@ -61,4 +61,16 @@ public static partial class DiagnosticCatalog
     public static readonly DiagnosticDescriptor ConductorsPerSlotMismatch = new(
         "WS3016", Severity.Error, "Declared conductors per slot disagree with the coils",
         "The winding declares 'conductors_per_slot N', but some slots hold a different number of conductors (the turns of every coil side in the slot, all layers and phases). The slot fill, current density and insulation design depend on this number.");
+
+    public static readonly DiagnosticDescriptor PhaseNotWound = new(
+        "WS3017", Severity.Error, "A declared phase has no coils",
+        "Every phase the machine declares must be wound: a phase without coils carries no current and makes no field, so the machine runs as an unbalanced winding of the remaining phases (or not at all). Usually a group or a pattern line was left out, or a phase name was mistyped in the coils. A symmetric m-phase winding has m identical phases shifted by the phase shift (Pyrhonen, Jokinen, Hrabovcova, Design of Rotating Electrical Machines, 2nd ed., ch. 2).");
+
+    public static readonly DiagnosticDescriptor NoWorkingWave = new(
+        "WS3018", Severity.Error, "No working wave at the declared pole count",
+        "A winding for 2p poles must make an air-gap wave at mechanical order p (p pole pairs). Its winding factor there, k_w = |sum of the coil-side phasors at order p| / (number of conductors), is zero when the phases' conductors cancel at that order: the winding then works, if at all, as a machine of another pole count and will not run as declared. The message names the order with the largest winding factor, where the layout does work. The classic cause is a slot pattern with every '-' forgotten: all coil sides of a phase carry the same sign, and the layout repeats every pole pair instead of every pole, doubling the working pole count (Pyrhonen et al., ch. 2: winding factors and space harmonics).");
+
+    public static readonly DiagnosticDescriptor DeclaredPitchContradicted = new(
+        "WS3019", Severity.Warning, "Declared pitch contradicted by the coils",
+        "The winding declares 'pitch y slots', but some of its explicit coils span a different number of slots (counted the short way round the bore). The declaration is what a reader, the closed-form pitch factor k_p = sin(y/tau * pi/2) and the slot patterns take for the winding (Pyrhonen et al., ch. 2), so it must agree with the coils: correct the coils or the declaration. Coils of a group are judged by the group's own pitch.");
 }

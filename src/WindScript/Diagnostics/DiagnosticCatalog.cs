@@ -7,7 +7,7 @@ namespace WindScript.Diagnostics;
 /// WS1xxx syntax, WS2xxx names, units and evaluation, WS3xxx winding consistency,
 /// WS4xxx drives, WS5xxx geometry, WS6xxx synthesis. Codes are never reused or renumbered.
 /// </summary>
-public static partial class DiagnosticCatalog
+internal static partial class DiagnosticCatalog
 {
     private static readonly Lazy<IReadOnlyList<DiagnosticDescriptor>> _all = new(() => Collect(typeof(DiagnosticCatalog)));
 

@@ -6,5 +6,6 @@ namespace WindScript.Diagnostics;
 /// </summary>
 public sealed record DiagnosticDescriptor(string Code, Severity Severity, string Title, string Explanation)
 {
+    /// <summary>A diagnostic of this kind at <paramref name="span"/> with its message.</summary>
     public Diagnostic At(Text.TextSpan span, string message) => new(this, span, message);
 }

@@ -23,6 +23,7 @@ public static class WindEmitter
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
+    /// <summary>The design as canonical .wind text (the formatter leaves it unchanged; compiling it gives the same design).</summary>
     public static string Emit(WindingDesign design, EmitOptions? options = null)
     {
         options ??= new EmitOptions();

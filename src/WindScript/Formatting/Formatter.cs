@@ -12,15 +12,17 @@ namespace WindScript.Formatting;
 /// </summary>
 public static class Formatter
 {
+    /// <summary>One level of indentation in canonical text.</summary>
     public const string Indent = "  ";
 
     /// <summary>The canonical text, or null when the file has syntax errors (it is then left alone).</summary>
-    public static string? Format(SyntaxTree tree)
+    internal static string? Format(SyntaxTree tree)
     {
         if (tree.Diagnostics.Count > 0) return null;
         return new Writer(tree).Run();
     }
 
+    /// <summary>The canonical form of a text, or null if it has syntax errors (comments are kept).</summary>
     public static string? Format(string text) => Format(SyntaxTree.Parse(text));
 
     private sealed class Writer(SyntaxTree tree)

@@ -10,6 +10,7 @@ public sealed class ConductorMatrix
 {
     private readonly int[] _cells;
 
+    /// <summary>An empty matrix of the given size.</summary>
     public ConductorMatrix(int phases, int slots, int layers)
     {
         Phases = phases;
@@ -18,10 +19,14 @@ public sealed class ConductorMatrix
         _cells = new int[phases * slots * layers];
     }
 
+    /// <summary>Number of phases m.</summary>
     public int Phases { get; }
+    /// <summary>Number of slots Q.</summary>
     public int Slots { get; }
+    /// <summary>Number of layers.</summary>
     public int Layers { get; }
 
+    /// <summary>Signed conductors of a phase in a slot (0-based) and layer (0 = top).</summary>
     public int this[int phase, int slotIndex, int layer]
     {
         get => _cells[(phase * Slots + slotIndex) * Layers + layer];

@@ -8,9 +8,12 @@ namespace WindScript.Model;
 /// </summary>
 public sealed record CurrentComponent(double Peak, double Omega, double PhaseAngle, TextSpan Span = default)
 {
+    /// <summary>True for direct current (zero frequency).</summary>
     public bool IsDirect => Omega == 0;
 
+    /// <summary>Frequency in Hz.</summary>
     public double FrequencyHz => Omega / (2 * Math.PI);
 
+    /// <summary>The instantaneous current (A) at <paramref name="time"/> (s): peak·cos(ωt + φ).</summary>
     public double At(double time) => Peak * Math.Cos(Omega * time + PhaseAngle);
 }

@@ -6,6 +6,7 @@ namespace WindScript.Model;
 /// <summary>The current of one phase in a drive: a sum of components (empty = no current).</summary>
 public sealed record PhaseCurrent(int Phase, ImmutableArray<CurrentComponent> Components, TextSpan Span = default)
 {
+    /// <summary>The phase current (A) at <paramref name="time"/> (s), all components summed.</summary>
     public double At(double time)
     {
         double sum = 0;
@@ -17,6 +18,7 @@ public sealed record PhaseCurrent(int Phase, ImmutableArray<CurrentComponent> Co
 /// <summary>An operating point: a current waveform for every phase.</summary>
 public sealed record Drive
 {
+    /// <summary>The drive's name, as written after <c>drive</c>.</summary>
     public required string Name { get; init; }
 
     /// <summary>One entry per phase, in phase order.</summary>
@@ -28,8 +30,10 @@ public sealed record Drive
     /// <summary>For a balanced set: the phase indices in the stated sequence; empty otherwise.</summary>
     public ImmutableArray<int> Sequence { get; init; } = [];
 
+    /// <summary>Where the drive block is in the source.</summary>
     public TextSpan Span { get; init; }
 
+    /// <summary>Where the drive's name is in the source.</summary>
     public TextSpan NameSpan { get; init; }
 
     /// <summary>

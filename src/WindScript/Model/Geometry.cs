@@ -27,6 +27,7 @@ public sealed record Geometry
     /// <summary>Peak of the fundamental air-gap flux density (tesla), for back-EMF.</summary>
     public double? GapFluxDensity { get; init; }
 
+    /// <summary>Bore radius (m), half the bore diameter; null without a bore.</summary>
     public double? BoreRadius => BoreDiameter / 2;
 
     /// <summary>The rotor radius actually used: given, or bore radius minus gap.</summary>

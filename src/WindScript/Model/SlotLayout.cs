@@ -3,6 +3,7 @@ namespace WindScript.Model;
 /// <summary>One coil side's place in the layout: which phase, with which sign and how many conductors.</summary>
 public readonly record struct SlotCell(int Phase, int Conductors)
 {
+    /// <summary>+1 for a go side, -1 for a return side, 0 for an empty cell.</summary>
     public int Sign => Math.Sign(Conductors);
 }
 
@@ -21,12 +22,15 @@ public sealed class SlotLayout
         _cells = new List<SlotCell>[slots, layers];
     }
 
+    /// <summary>Number of slots Q.</summary>
     public int Slots { get; }
+    /// <summary>Number of layers.</summary>
     public int Layers { get; }
 
     /// <summary>The phases in a slot (1-based) and layer (0 = top).</summary>
     public IReadOnlyList<SlotCell> this[int slot, int layer] => (IReadOnlyList<SlotCell>?)_cells[slot - 1, layer] ?? [];
 
+    /// <summary>The layout of a design's coils.</summary>
     public static SlotLayout From(WindingDesign design)
     {
         var m = design.Conductors;

@@ -6,6 +6,7 @@ namespace WindScript.Model;
 /// <summary>The stator winding: its coils, layers and parallel paths, plus what the source declared.</summary>
 public sealed record Winding
 {
+    /// <summary>The winding's name, as written after <c>winding</c>.</summary>
     public required string Name { get; init; }
 
     /// <summary>Coil sides a slot may hold (1 or 2).</summary>
@@ -14,6 +15,7 @@ public sealed record Winding
     /// <summary>Parallel paths per phase.</summary>
     public int Paths { get; init; } = 1;
 
+    /// <summary>Every coil of the winding, in source order.</summary>
     public required ImmutableArray<Coil> Coils { get; init; }
 
     /// <summary>Coil pitch in slots if the source stated one.</summary>
@@ -25,6 +27,7 @@ public sealed record Winding
     /// <summary>Conductors per slot if the source stated them (checked against the coils).</summary>
     public int? DeclaredConductorsPerSlot { get; init; }
 
+    /// <summary>Where the winding block is in the source.</summary>
     public TextSpan Span { get; init; }
 
     /// <summary>The span of the block's <c>winding</c> keyword, where whole-winding diagnostics point.</summary>
@@ -32,7 +35,12 @@ public sealed record Winding
 
     /// <summary>Spans of the declarations of paths, series turns and conductors (for diagnostics and fixes).</summary>
     public TextSpan PathsSpan { get; init; }
+    /// <summary>Where <c>series_turns</c> is written (empty if it is not).</summary>
     public TextSpan SeriesTurnsSpan { get; init; }
+    /// <summary>Where <c>conductors_per_slot</c> is written (empty if it is not).</summary>
     public TextSpan ConductorsPerSlotSpan { get; init; }
+    /// <summary>Where <c>layers</c> is written (empty if it is not).</summary>
     public TextSpan LayersSpan { get; init; }
+    /// <summary>Where the winding's own <c>pitch</c> is written (empty if it is not).</summary>
+    public TextSpan PitchSpan { get; init; }
 }

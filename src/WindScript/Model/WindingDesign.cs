@@ -10,35 +10,46 @@ namespace WindScript.Model;
 /// </summary>
 public sealed record WindingDesign
 {
+    /// <summary>The machine's name, as written after <c>machine</c>.</summary>
     public required string Name { get; init; }
 
+    /// <summary>Number of slots Q, numbered from 1.</summary>
     public required int Slots { get; init; }
 
     /// <summary>Number of poles, 2p (always even).</summary>
     public required int Poles { get; init; }
 
+    /// <summary>Pole pairs p.</summary>
     public int PolePairs => Poles / 2;
 
+    /// <summary>The phases, in order.</summary>
     public required ImmutableArray<Phase> Phases { get; init; }
 
     /// <summary>Intended electrical angle between the axes of successive phases, in degrees.</summary>
     public required double PhaseShiftDegrees { get; init; }
 
+    /// <summary>Core dimensions (bore, stack, gap, slot opening, skew...).</summary>
     public Geometry Geometry { get; init; } = new();
 
+    /// <summary>The winding: layers, paths and coils.</summary>
     public required Winding Winding { get; init; }
 
+    /// <summary>The operating points (drives), in source order.</summary>
     public ImmutableArray<Drive> Drives { get; init; } = [];
 
     /// <summary>Defaults the evaluator applied that change results, worded for people ("phase shift 120 deg (default 360/m)").</summary>
     public ImmutableArray<string> Defaults { get; init; } = [];
 
+    /// <summary>Where the machine block is in the source.</summary>
     public TextSpan MachineSpan { get; init; }
 
     /// <summary>The span of the <c>machine</c> keyword, where whole-machine diagnostics point.</summary>
     public TextSpan MachineKeywordSpan { get; init; }
+    /// <summary>Where <c>slots</c> is written.</summary>
     public TextSpan SlotsSpan { get; init; }
+    /// <summary>Where <c>poles</c> is written.</summary>
     public TextSpan PolesSpan { get; init; }
+    /// <summary>Where <c>phases</c> is written.</summary>
     public TextSpan PhasesSpan { get; init; }
 
     /// <summary>Machine periodicity t = gcd(Q, p).</summary>
@@ -73,12 +84,12 @@ public sealed record WindingDesign
     /// </summary>
     public double SeriesTurns(int phase) => Analysis.WindingSpectrum.Of(this).SeriesTurns(phase);
 
-    public static long Gcd(long a, long b)
+    internal static long Gcd(long a, long b)
     {
         a = Math.Abs(a); b = Math.Abs(b);
         while (b != 0) (a, b) = (b, a % b);
         return a;
     }
 
-    public static long Lcm(long a, long b) => a == 0 || b == 0 ? 0 : Math.Abs(a / Gcd(a, b) * b);
+    internal static long Lcm(long a, long b) => a == 0 || b == 0 ? 0 : Math.Abs(a / Gcd(a, b) * b);
 }

@@ -10,7 +10,7 @@ namespace WindScript.Review;
 /// coil; the form the source used (pattern, explicit, loop) and the group names do not matter.
 /// The comparison lists coils only when the slot layout is unchanged: a changed slot already says it.
 /// </summary>
-public static class CoilComparison
+internal static class CoilComparison
 {
     private readonly record struct Connection(int Phase, int Go, int Return, int GoLayer, int ReturnLayer, int Turns);
 

@@ -7,7 +7,7 @@ namespace WindScript.Review;
 /// Diagnostics that appeared or disappeared, compared by code and message (not position, which
 /// moves whenever lines are added above). Repeated findings are matched one for one.
 /// </summary>
-public static class DiagnosticComparison
+internal static class DiagnosticComparison
 {
     public static ImmutableArray<DiagnosticChange> Compare(Compilation? a, Compilation? b)
     {

@@ -8,7 +8,7 @@ namespace WindScript.Review;
 /// Drives matched by name and compared line by line on a canonical description of each phase
 /// current (rounded to 6 significant digits, so rms and peak forms of one current agree).
 /// </summary>
-public static class DriveComparison
+internal static class DriveComparison
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

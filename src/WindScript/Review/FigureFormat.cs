@@ -3,7 +3,7 @@ using System.Globalization;
 namespace WindScript.Review;
 
 /// <summary>How figures read in reviews and reports: up to 5 significant digits, no exponent for machine-sized numbers.</summary>
-public static class FigureFormat
+internal static class FigureFormat
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

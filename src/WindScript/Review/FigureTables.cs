@@ -5,7 +5,7 @@ using WindScript.Model;
 namespace WindScript.Review;
 
 /// <summary>The numeric sections of a review: each figure of both sides side by side.</summary>
-public static class FigureTables
+internal static class FigureTables
 {
     /// <summary>Winding factors and MMF waves are listed up to this electrical order.</summary>
     public const int ListedElectricalOrder = 13;

@@ -9,7 +9,7 @@ namespace WindScript.Review;
 /// diagnostics. Comments, layout and the form of the source leave it unchanged, so as a git
 /// textconv it makes <c>git log -p</c> and <c>git diff</c> show physical changes line by line.
 /// </summary>
-public static class PhysicalFacts
+internal static class PhysicalFacts
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

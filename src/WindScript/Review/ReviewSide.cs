@@ -13,13 +13,16 @@ public sealed record ReviewSide(string Label, Compilation? Compilation, Analysis
     /// <summary>Orders up to this electrical order are analysed for a review.</summary>
     public const int MaxElectricalOrder = 25;
 
+    /// <summary>The design of this side, or null.</summary>
     public WindingDesign? Design => Compilation?.Design;
 
+    /// <summary>True if this side does not exist (a file added or deleted in git).</summary>
     public bool IsAbsent => Compilation is null;
 
     /// <summary>Compiles and analyses a source text.</summary>
     public static ReviewSide FromText(string text, string label) => Of(Compilation.Compile(text, label), label);
 
+    /// <summary>A side from a compilation, evaluated once.</summary>
     public static ReviewSide Of(Compilation compilation, string label)
     {
         var analysis = compilation.Design is { } design

@@ -8,7 +8,7 @@ namespace WindScript.Review;
 /// The slot layout compared cell by cell (slot and layer): phase (by index, so renaming a phase
 /// is no change), polarity and conductors. Needs the same slot count on both sides.
 /// </summary>
-public static class SlotComparison
+internal static class SlotComparison
 {
     public static (string? Note, ImmutableArray<SlotChange> Changes) Compare(WindingDesign? a, WindingDesign? b)
     {

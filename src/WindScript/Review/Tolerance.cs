@@ -5,7 +5,7 @@ namespace WindScript.Review;
 /// winding written in another form (a slot pattern or explicit coils, coils in another order)
 /// sums its conductors in another order and may differ in the last digits, never more.
 /// </summary>
-public static class Tolerance
+internal static class Tolerance
 {
     public const double Relative = 1e-9;
 

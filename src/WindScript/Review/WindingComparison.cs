@@ -16,6 +16,7 @@ public static class WindingComparison
     public static WindingDiff Compare(string oldText, string oldLabel, string newText, string newLabel) =>
         Compare(ReviewSide.FromText(oldText, oldLabel), ReviewSide.FromText(newText, newLabel));
 
+    /// <summary>What changed physically from <paramref name="old"/> to <paramref name="new"/>.</summary>
     public static WindingDiff Compare(ReviewSide old, ReviewSide @new)
     {
         var (slotNote, slots) = SlotComparison.Compare(old.Design, @new.Design);

@@ -54,14 +54,17 @@ public sealed record WindingDiff(
 /// <summary>A number on both sides (null where a side lacks it), in the unit named.</summary>
 public sealed record FigureRow(string Name, double? Old, double? New, string Unit = "")
 {
+    /// <summary>True if the figure differs beyond 1e-9 relative.</summary>
     public bool Changed => !Tolerance.Same(Old, New);
 
+    /// <summary>New minus old, or null unless both exist.</summary>
     public double? Delta => Old is { } a && New is { } b ? b - a : null;
 }
 
 /// <summary>A text on both sides (null where a side lacks it).</summary>
 public sealed record TextRow(string Name, string? Old, string? New)
 {
+    /// <summary>True if the text differs.</summary>
     public bool Changed => Old != New;
 }
 
@@ -83,8 +86,10 @@ public sealed record PhaseFactors(string Phase, ImmutableArray<FactorRow> Rows);
 /// </summary>
 public sealed record FactorRow(int Order, double? OldElectricalOrder, double? NewElectricalOrder, double? Old, double? New)
 {
+    /// <summary>True if the factor differs beyond 1e-9 relative.</summary>
     public bool Changed => !Tolerance.Same(Old, New);
 
+    /// <summary>New minus old, or null unless both exist.</summary>
     public double? Delta => Old is { } a && New is { } b ? b - a : null;
 }
 
@@ -94,13 +99,23 @@ public sealed record FactorRow(int Order, double? OldElectricalOrder, double? Ne
 /// </summary>
 public sealed record MmfRow(int Order, double? OldForward, double? OldBackward, double? NewForward, double? NewBackward)
 {
+    /// <summary>True if either wave differs beyond 1e-9 relative.</summary>
     public bool Changed => !Tolerance.Same(OldForward, NewForward) || !Tolerance.Same(OldBackward, NewBackward);
 }
 
 /// <summary>A drive added, removed or changed, with the lines of its description that differ.</summary>
 public sealed record DriveChange(string Name, DriveChangeKind Kind, ImmutableArray<TextRow> Details);
 
-public enum DriveChangeKind { Added, Removed, Changed }
+/// <summary>How a drive differs between the two files.</summary>
+public enum DriveChangeKind
+{
+    /// <summary>The drive exists only in the new file.</summary>
+    Added,
+    /// <summary>The drive exists only in the old file.</summary>
+    Removed,
+    /// <summary>The drive exists in both and differs.</summary>
+    Changed,
+}
 
 /// <summary>A diagnostic (compared by code and message) present on one side only, with its 1-based line there.</summary>
 public sealed record DiagnosticChange(bool Added, string Code, Severity Severity, string Message, int Line);

@@ -11,7 +11,7 @@ namespace WindScript.Semantics;
 /// patterns into an immutable <see cref="WindingDesign"/>. It runs on whatever parsed, so a
 /// file with syntax errors still gets every other check.
 /// </summary>
-public static class Evaluator
+internal static class Evaluator
 {
     public sealed record Result(WindingDesign? Design, SemanticModel Model, IReadOnlyList<Diagnostic> Diagnostics);
 

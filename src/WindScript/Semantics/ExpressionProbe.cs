@@ -10,7 +10,7 @@ namespace WindScript.Semantics;
 /// place, so scoping is exactly the evaluator's. Returns null when the value depends on a loop
 /// variable (it has many values) or did not evaluate (its diagnostic was reported already).
 /// </summary>
-public static class ExpressionProbe
+internal static class ExpressionProbe
 {
     public static Quantity? Evaluate(SemanticModel model, ExpressionSyntax expression, int slots = 0)
     {

@@ -6,7 +6,7 @@ namespace WindScript.Semantics;
 /// What the evaluator learned about names and places in a file, for hover, go-to-definition,
 /// references and document symbols.
 /// </summary>
-public sealed class SemanticModel
+internal sealed class SemanticModel
 {
     internal List<Symbol> SymbolList { get; } = [];
 

@@ -3,7 +3,7 @@ using WindScript.Units;
 
 namespace WindScript.Semantics;
 
-public enum SymbolKind
+internal enum SymbolKind
 {
     Value,        // let
     LoopVariable,
@@ -15,7 +15,7 @@ public enum SymbolKind
 }
 
 /// <summary>A named thing in a file: where it is defined, where it is used, and its value if it has one.</summary>
-public sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
+internal sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
 {
     private readonly List<TextSpan> _references = [];
     private readonly HashSet<TextSpan> _seen = [];

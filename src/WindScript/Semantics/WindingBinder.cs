@@ -75,6 +75,7 @@ internal sealed class WindingBinder(
             SeriesTurnsSpan = seriesSpan,
             ConductorsPerSlotSpan = conductorsSpan,
             LayersSpan = layersSpan,
+            PitchSpan = pitchSpan,
         };
     }
 
@@ -226,7 +227,7 @@ internal sealed class WindingBinder(
             return;
         }
         if (phase is null || go is null || ret is null || turns is null) return;
-        _coils.Add(new Coil(phase.Value, go.Value, ret.Value, goLayer, returnLayer, turns.Value, coil.Reversed ? -1 : 1, settings.Name, coil.Span));
+        _coils.Add(new Coil { Phase = phase.Value, GoSlot = go.Value, ReturnSlot = ret.Value, GoLayer = goLayer, ReturnLayer = returnLayer, Turns = turns.Value, Polarity = coil.Reversed ? -1 : 1, Group = settings.Name, Span = coil.Span });
     }
 
     // Each option once: with two turn counts (or layers) one is a mistake, and which one is not ours to guess.
@@ -349,7 +350,7 @@ internal sealed class WindingBinder(
                         $"the bottom layer of slot {ret} should hold {Signed(-cell.Sign, phase)} to close the coil from top slot {s} (pitch {y})");
                     continue;
                 }
-                _coils.Add(new Coil(phase, s, ret, 0, 1, turns, cell.Sign, settings.Name, cell.Entry.Span));
+                _coils.Add(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
             }
         }
         else if (bottom is not null)
@@ -359,7 +360,7 @@ internal sealed class WindingBinder(
                 var cell = bottom[s - 1];
                 if (cell.Phase is not { } phase) continue;
                 int go = Wrap(s - y + q);
-                _coils.Add(new Coil(phase, go, s, 0, 1, turns, -cell.Sign, settings.Name, cell.Entry.Span));
+                _coils.Add(new Coil { Phase = phase, GoSlot = go, ReturnSlot = s, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = -cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
             }
         }
     }
@@ -409,7 +410,7 @@ internal sealed class WindingBinder(
                 continue;
             }
             claimed[ret - 1] = true;
-            _coils.Add(new Coil(phase, s, ret, 0, 0, turns, 1, group, cell.Entry.Span.Cover(other.Entry.Span)));
+            _coils.Add(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 0, Turns = turns, Polarity = 1, Group = group, Span = cell.Entry.Span.Cover(other.Entry.Span) });
         }
         for (int s = 1; s <= q; s++)
         {

@@ -7,6 +7,7 @@ namespace WindScript.Sweep;
 /// </summary>
 public static class LayoutSweep
 {
+    /// <summary>Every feasible layout of the spec (or of one shard of it) in the fixed sweep order, evaluated.</summary>
     public static IEnumerable<SweepRecord> Records(SweepSpec spec, SweepShard? shard = null)
     {
         var evaluator = new SweepEvaluator(spec);

@@ -15,7 +15,7 @@ namespace WindScript.Sweep;
 /// their numbers); without it, K = ID − MIN + 1 and N = MAX − MIN + 1 or COUNT, which must agree
 /// (a stepped or sparse array does not give a contiguous 1..N).
 /// </remarks>
-public static class SchedulerShard
+internal static class SchedulerShard
 {
     public const string Kubernetes = "JOB_COMPLETION_INDEX";
     public const string SlurmId = "SLURM_ARRAY_TASK_ID", SlurmMin = "SLURM_ARRAY_TASK_MIN", SlurmMax = "SLURM_ARRAY_TASK_MAX", SlurmCount = "SLURM_ARRAY_TASK_COUNT";
@@ -27,6 +27,7 @@ public static class SchedulerShard
     /// <summary>The shard and where it came from, or null with a usage message.</summary>
     /// <param name="environment">Looks a variable up; null when it is not set.</param>
     /// <param name="shards">N from <c>--shards</c>, when given.</param>
+    /// <param name="error">Why no shard could be taken from the environment (null on success).</param>
     public static (SweepShard Shard, string Source)? Resolve(Func<string, string?> environment, int? shards, out string? error)
     {
         error = null;

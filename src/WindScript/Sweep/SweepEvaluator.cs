@@ -16,7 +16,7 @@ namespace WindScript.Sweep;
 /// vanishes exactly when m·β is a whole turn and β is not (tested in integers). The spectrum
 /// repeats with period Q in the order and mirrors at Q/2, so orders 0..Q/2 decide every order.
 /// </remarks>
-public sealed class SweepEvaluator
+internal sealed class SweepEvaluator
 {
     private const double Negligible = MachineAnalysis.Negligible;
 

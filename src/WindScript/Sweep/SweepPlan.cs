@@ -7,7 +7,7 @@ namespace WindScript.Sweep;
 /// ascending; combinations that admit no balanced winding are left out. The enumeration is lazy,
 /// so memory stays flat however large the ranges.
 /// </summary>
-public static class SweepPlan
+internal static class SweepPlan
 {
     /// <summary>Every candidate of the spec (all shards).</summary>
     public static IEnumerable<SweepCandidate> All(SweepSpec spec)

@@ -7,10 +7,15 @@ namespace WindScript.Sweep;
 /// </summary>
 public sealed class SweepRecord
 {
+    /// <summary>Number of slots Q.</summary>
     public int Slots { get; internal set; }
+    /// <summary>Number of poles 2p.</summary>
     public int Poles { get; internal set; }
+    /// <summary>Number of phases m.</summary>
     public int Phases { get; internal set; }
+    /// <summary>Number of layers (1 or 2).</summary>
     public int Layers { get; internal set; }
+    /// <summary>Coil pitch in slots.</summary>
     public int Pitch { get; internal set; }
 
     /// <summary>Slots per pole per phase q = Q/(2p·m).</summary>
@@ -43,6 +48,7 @@ public sealed class SweepRecord
     /// <summary>True if waves of adjacent orders ν and ν + 1 coexist: their fields pull the rotor sideways (unbalanced magnetic pull).</summary>
     public bool AdjacentOrders { get; internal set; }
 
+    /// <summary>Winding factor at the working order (electrical order 1).</summary>
     public double FundamentalWindingFactor => WindingFactors.Length > 0 ? WindingFactors[0] : 0;
 
     /// <summary>A copy that the evaluator will not overwrite.</summary>

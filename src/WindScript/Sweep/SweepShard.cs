@@ -9,8 +9,10 @@ namespace WindScript.Sweep;
 /// </summary>
 public readonly record struct SweepShard(int Index, int Count)
 {
+    /// <summary>The whole sweep as one shard (1/1).</summary>
     public static readonly SweepShard Whole = new(1, 1);
 
+    /// <summary>True if this shard is the whole sweep.</summary>
     public bool IsWhole => Count == 1;
 
     /// <summary>Reads "K/N"; null with a message otherwise.</summary>
@@ -30,5 +32,6 @@ public readonly record struct SweepShard(int Index, int Count)
     /// <summary>True if a layout whose work starts at <paramref name="start"/> of <paramref name="total"/> belongs to this shard.</summary>
     public bool Holds(long start, long total) => total <= 0 || (int)((Int128)start * Count / total) == Index - 1;
 
+    /// <summary>"K/N".</summary>
     public override string ToString() => $"{Index}/{Count}";
 }

@@ -9,12 +9,19 @@ namespace WindScript.Sweep;
 /// </summary>
 public sealed record SweepSpec
 {
+    /// <summary>Lowest slot count swept.</summary>
     public required int SlotsFrom { get; init; }
+    /// <summary>Highest slot count swept.</summary>
     public required int SlotsTo { get; init; }
+    /// <summary>Lowest pole count swept (odd values are skipped).</summary>
     public required int PolesFrom { get; init; }
+    /// <summary>Highest pole count swept.</summary>
     public required int PolesTo { get; init; }
+    /// <summary>Number of phases m.</summary>
     public int Phases { get; init; } = 3;
+    /// <summary>Number of layers (1 or 2).</summary>
     public int Layers { get; init; } = 2;
+    /// <summary>Which coil pitches are laid out.</summary>
     public PitchRule Pitch { get; init; } = PitchRule.PolePitch;
 
     /// <summary>Winding factors are reported at electrical orders 1..Orders (mechanical orders p..Orders·p).</summary>

@@ -3,4 +3,4 @@ using WindScript.Text;
 namespace WindScript.Syntax;
 
 /// <summary>The whole file: its top-level statements.</summary>
-public sealed record CompilationUnitSyntax(IReadOnlyList<StatementSyntax> Statements, TextSpan Span) : SyntaxNode(Span);
+internal sealed record CompilationUnitSyntax(IReadOnlyList<StatementSyntax> Statements, TextSpan Span) : SyntaxNode(Span);

@@ -8,7 +8,7 @@ namespace WindScript.Syntax;
 /// runs of blank or comment-only lines fold into one. Comments go to a side list. The lexer
 /// never fails: an unknown character becomes a Bad token for the parser to report.
 /// </summary>
-public static class Lexer
+internal static class Lexer
 {
     public static (Token[] Tokens, Comment[] Comments) Lex(string text)
     {

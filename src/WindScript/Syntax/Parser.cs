@@ -14,7 +14,7 @@ namespace WindScript.Syntax;
 /// line (skipping a whole braced body if the bad line opened one), so every independent
 /// mistake in a file is reported once and nothing cascades.
 /// </summary>
-public static class Parser
+internal static class Parser
 {
     public static CompilationUnitSyntax ParseTokens(Token[] tokens)
     {

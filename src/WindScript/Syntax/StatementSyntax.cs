@@ -3,37 +3,37 @@ using WindScript.Text;
 namespace WindScript.Syntax;
 
 /// <summary>One line of a file or block (a block statement spans its whole body).</summary>
-public abstract record StatementSyntax(TextSpan Span) : SyntaxNode(Span);
+internal abstract record StatementSyntax(TextSpan Span) : SyntaxNode(Span);
 
 /// <summary><c>let n = 9</c>: a named value, visible below it in its block and nested blocks.</summary>
-public sealed record LetSyntax(KeywordSyntax Keyword, NameSyntax Name, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span);
+internal sealed record LetSyntax(KeywordSyntax Keyword, NameSyntax Name, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary>A keyword with one value: <c>slots 36</c>, <c>bore 150 mm</c>, <c>turns 11</c>, <c>pitch 7 slots</c>.</summary>
-public sealed record PropertySyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span)
+internal sealed record PropertySyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span)
 {
     /// <summary>The property's entry in the vocabulary (the parser reads only words that have one).</summary>
     public PropertyWord Property => Vocabulary.Property(Keyword.Text)!;
 }
 
 /// <summary><c>phases U V W</c>.</summary>
-public sealed record PhasesSyntax(KeywordSyntax Keyword, IReadOnlyList<NameSyntax> Names, TextSpan Span) : StatementSyntax(Span);
+internal sealed record PhasesSyntax(KeywordSyntax Keyword, IReadOnlyList<NameSyntax> Names, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary>A bare flag: <c>neutral</c>.</summary>
-public sealed record FlagSyntax(KeywordSyntax Keyword, TextSpan Span) : StatementSyntax(Span);
+internal sealed record FlagSyntax(KeywordSyntax Keyword, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary>
 /// A block: <c>machine NAME { ... }</c>, <c>winding NAME { ... }</c>, <c>group NAME { ... }</c>,
 /// <c>drive NAME { ... }</c>. <see cref="Name"/> is a missing name (<see cref="NameSyntax.IsMissing"/>)
 /// when none is written; <see cref="Closed"/> is false when the closing brace is missing.
 /// </summary>
-public sealed record BlockSyntax(KeywordSyntax Keyword, NameSyntax Name, IReadOnlyList<StatementSyntax> Body, bool Closed, TextSpan Span)
+internal sealed record BlockSyntax(KeywordSyntax Keyword, NameSyntax Name, IReadOnlyList<StatementSyntax> Body, bool Closed, TextSpan Span)
     : StatementSyntax(Span)
 {
     public BlockKind Kind => Vocabulary.Block(Keyword.Text)!.Kind;
 }
 
 /// <summary><c>for k in 0 .. 11 step 1 { ... }</c>: the range is inclusive at both ends.</summary>
-public sealed record ForSyntax(KeywordSyntax Keyword, NameSyntax Variable, ExpressionSyntax From, ExpressionSyntax To, ExpressionSyntax? Step,
+internal sealed record ForSyntax(KeywordSyntax Keyword, NameSyntax Variable, ExpressionSyntax From, ExpressionSyntax To, ExpressionSyntax? Step,
     IReadOnlyList<StatementSyntax> Body, bool Closed, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary>
@@ -41,7 +41,7 @@ public sealed record ForSyntax(KeywordSyntax Keyword, NameSyntax Variable, Expre
 /// is kept, wherever it stands), go and return slots, and every option as written, in order
 /// (a repeated option is the binder's to report).
 /// </summary>
-public sealed record CoilSyntax(
+internal sealed record CoilSyntax(
     KeywordSyntax Keyword,
     Token? Minus,
     NameSyntax Phase,
@@ -63,19 +63,19 @@ public sealed record CoilSyntax(
 }
 
 /// <summary>An option after a coil's slots, introduced by its keyword.</summary>
-public abstract record CoilOptionSyntax(KeywordSyntax Keyword, TextSpan Span) : SyntaxNode(Span);
+internal abstract record CoilOptionSyntax(KeywordSyntax Keyword, TextSpan Span) : SyntaxNode(Span);
 
 /// <summary><c>turns 9</c> on a coil.</summary>
-public sealed record CoilTurnsSyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : CoilOptionSyntax(Keyword, Span);
+internal sealed record CoilTurnsSyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : CoilOptionSyntax(Keyword, Span);
 
 /// <summary><c>layer bottom</c> on a coil.</summary>
-public sealed record CoilLayerSyntax(KeywordSyntax Keyword, KeywordSyntax Layer, TextSpan Span) : CoilOptionSyntax(Keyword, Span)
+internal sealed record CoilLayerSyntax(KeywordSyntax Keyword, KeywordSyntax Layer, TextSpan Span) : CoilOptionSyntax(Keyword, Span)
 {
     public LayerName LayerKind => Vocabulary.LayerOf(Layer.Text)!.Name;
 }
 
 /// <summary>One entry of a slot pattern: a phase with its sign token (<c>-</c>, <c>+</c> or none), or '_' for an empty position.</summary>
-public sealed record PatternEntrySyntax(Token? Sign, NameSyntax? Phase, TextSpan Span) : SyntaxNode(Span)
+internal sealed record PatternEntrySyntax(Token? Sign, NameSyntax? Phase, TextSpan Span) : SyntaxNode(Span)
 {
     public bool Reversed => Sign is { Kind: TokenKind.Minus };
 }
@@ -84,14 +84,14 @@ public sealed record PatternEntrySyntax(Token? Sign, NameSyntax? Phase, TextSpan
 /// <c>top: U U -W -W repeat 3</c>: the phase of each slot in one layer, in slot order from
 /// slot 1. Several lines for the same layer continue one another.
 /// </summary>
-public sealed record PatternSyntax(KeywordSyntax Layer, IReadOnlyList<PatternEntrySyntax> Entries, ExpressionSyntax? Repeat, TextSpan Span)
+internal sealed record PatternSyntax(KeywordSyntax Layer, IReadOnlyList<PatternEntrySyntax> Entries, ExpressionSyntax? Repeat, TextSpan Span)
     : StatementSyntax(Span)
 {
     public LayerName LayerKind => Vocabulary.LayerOf(Layer.Text)!.Name;
 }
 
 /// <summary>What went wrong on a line the parser could not read.</summary>
-public enum SyntaxErrorKind
+internal enum SyntaxErrorKind
 {
     /// <summary>A token other than the grammar expected (see <see cref="ErrorStatementSyntax.Expected"/>).</summary>
     Unexpected,
@@ -109,7 +109,7 @@ public enum SyntaxErrorKind
 /// what the grammar expected there; the message is composed from these after parsing
 /// (<see cref="SyntaxErrorMessages"/>), so nothing re-reads the source text.
 /// </summary>
-public sealed record ErrorStatementSyntax(
+internal sealed record ErrorStatementSyntax(
     SyntaxErrorKind Kind, IReadOnlyList<Token> Tokens, int ErrorIndex, IReadOnlyList<string> Expected, TextSpan ErrorSpan, TextSpan Span)
     : StatementSyntax(Span)
 {

@@ -4,7 +4,7 @@ namespace WindScript.Syntax;
 /// The one-line message of a syntax error, composed from the error node after parsing: the
 /// parser only records what it found and what it expected.
 /// </summary>
-public static class SyntaxErrorMessages
+internal static class SyntaxErrorMessages
 {
     private const int MaxExpected = 6;
 

@@ -5,7 +5,7 @@ namespace WindScript.Syntax;
 /// server's hover, completion and symbols): the children of a node, and the chain of nodes
 /// from the root down to the most specific one at an offset.
 /// </summary>
-public static class SyntaxNavigation
+internal static class SyntaxNavigation
 {
     /// <summary>The direct children of a node, in source order.</summary>
     public static IEnumerable<SyntaxNode> Children(SyntaxNode node)

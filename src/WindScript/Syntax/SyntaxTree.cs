@@ -4,7 +4,7 @@ using WindScript.Text;
 namespace WindScript.Syntax;
 
 /// <summary>The result of reading one file: tokens, comments, the tree and the syntax diagnostics.</summary>
-public sealed class SyntaxTree
+internal sealed class SyntaxTree
 {
     private SyntaxTree(SourceText source, Token[] tokens, Comment[] comments, CompilationUnitSyntax root, IReadOnlyList<Diagnostic> diagnostics)
     {

@@ -3,7 +3,7 @@ using WindScript.Text;
 namespace WindScript.Syntax;
 
 /// <summary>A lexical token with its exact place in the source.</summary>
-public readonly record struct Token(TokenKind Kind, string Text, TextSpan Span)
+internal readonly record struct Token(TokenKind Kind, string Text, TextSpan Span)
 {
     public override string ToString() => Kind switch
     {
@@ -14,4 +14,4 @@ public readonly record struct Token(TokenKind Kind, string Text, TextSpan Span)
 }
 
 /// <summary>A '#' comment, kept aside from the tokens so that the formatter can put it back.</summary>
-public readonly record struct Comment(string Text, TextSpan Span, bool OwnLine);
+internal readonly record struct Comment(string Text, TextSpan Span, bool OwnLine);

@@ -1,6 +1,6 @@
 namespace WindScript.Syntax;
 
-public enum TokenKind
+internal enum TokenKind
 {
     Word,        // identifiers and keywords: letters, digits, '_' (not starting with a digit)
     Number,      // 12, 0.5, 1e-3

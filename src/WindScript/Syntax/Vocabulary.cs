@@ -12,7 +12,7 @@ namespace WindScript.Syntax;
 /// To add a property: one entry in <see cref="Properties"/> (and its <see cref="PropertyName"/>),
 /// then its meaning in the binder of its block (DEVELOPERS.md has the recipe).
 /// </summary>
-public static class Vocabulary
+internal static class Vocabulary
 {
     // ---- statement and waveform words (constants, so code can match on them) -------------------
 

@@ -3,23 +3,23 @@ using WindScript.Units;
 namespace WindScript.Syntax;
 
 /// <summary>The kinds of block. The words that introduce them are in <see cref="Vocabulary.Blocks"/>.</summary>
-public enum BlockKind { Machine, Winding, Group, Drive }
+internal enum BlockKind { Machine, Winding, Group, Drive }
 
 /// <summary>Every <c>keyword value</c> property. The words, owners and meanings are in <see cref="Vocabulary.Properties"/>.</summary>
-public enum PropertyName
+internal enum PropertyName
 {
     Slots, Poles, Bore, Stack, Gap, SlotOpening, RotorRadius, Skew, PhaseShift, GapFluxDensity,
     Layers, Turns, Pitch, Paths, SeriesTurns, ConductorsPerSlot,
 }
 
 /// <summary>A layer word: <c>top</c> and <c>bottom</c> of a double-layer winding, <c>slots</c> for the one layer of a single-layer pattern.</summary>
-public enum LayerName { Top, Bottom, Slots }
+internal enum LayerName { Top, Bottom, Slots }
 
 /// <summary>How a sinusoid's amplitude is stated: its peak, or its rms value (peak = √2·rms).</summary>
-public enum AmplitudeMeasure { Peak, Rms }
+internal enum AmplitudeMeasure { Peak, Rms }
 
 /// <summary>What a property's value is.</summary>
-public enum ValueKind
+internal enum ValueKind
 {
     /// <summary>A plain whole number (a count).</summary>
     WholeNumber,
@@ -28,13 +28,13 @@ public enum ValueKind
 }
 
 /// <summary>A block word: its kind, whether it stands at the top of a file, and the other statements it takes besides its properties.</summary>
-public sealed record BlockWord(BlockKind Kind, string Word, bool TopLevel, IReadOnlyList<string> OtherStatements, string Help);
+internal sealed record BlockWord(BlockKind Kind, string Word, bool TopLevel, IReadOnlyList<string> OtherStatements, string Help);
 
 /// <summary>
 /// A property: its word, the blocks that take it, its value kind and unit dimension, and one
 /// line of help (shown on hover and in completion).
 /// </summary>
-public sealed record PropertyWord(PropertyName Name, string Word, IReadOnlyList<BlockKind> Blocks, ValueKind Value, Dimension Dimension, string Help)
+internal sealed record PropertyWord(PropertyName Name, string Word, IReadOnlyList<BlockKind> Blocks, ValueKind Value, Dimension Dimension, string Help)
 {
     /// <summary>A second dimension the value may have (skew: slot pitches or an angle).</summary>
     public Dimension? AlsoAccepts { get; init; }
@@ -43,19 +43,19 @@ public sealed record PropertyWord(PropertyName Name, string Word, IReadOnlyList<
 }
 
 /// <summary>A layer word of a slot pattern or a coil's <c>layer</c> option.</summary>
-public sealed record LayerWord(LayerName Name, string Word, string Help);
+internal sealed record LayerWord(LayerName Name, string Word, string Help);
 
 /// <summary>An amplitude word of a sinusoid.</summary>
-public sealed record MeasureWord(AmplitudeMeasure Measure, string Word, string Help);
+internal sealed record MeasureWord(AmplitudeMeasure Measure, string Word, string Help);
 
 /// <summary>A built-in function of expressions.</summary>
-public sealed record FunctionWord(string Name, int Arity, string Help);
+internal sealed record FunctionWord(string Name, int Arity, string Help);
 
 /// <summary>
 /// Any other reserved word (statement and waveform words). <see cref="ValueDimension"/> is the
 /// dimension of the value that follows it, where one does (<c>at</c> takes a frequency).
 /// </summary>
-public sealed record StatementWord(string Word, string Help)
+internal sealed record StatementWord(string Word, string Help)
 {
     public Dimension? ValueDimension { get; init; }
 }

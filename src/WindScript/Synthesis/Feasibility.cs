@@ -21,13 +21,14 @@ namespace WindScript.Synthesis;
 /// </remarks>
 public static class Feasibility
 {
+    /// <summary>Whether Q slots, 2p poles and m phases admit a balanced winding with the given layers, with the condition and the nearest feasible counts.</summary>
     public static FeasibilityReport Check(int slots, int poles, int phases, int layers)
     {
         var belts = PhaseBelts.ForPhases(phases) ?? throw new ArgumentOutOfRangeException(nameof(phases), "at least one phase is needed");
         return Check(slots, poles, belts, layers);
     }
 
-    public static FeasibilityReport Check(int slots, int poles, PhaseBelts belts, int layers)
+    internal static FeasibilityReport Check(int slots, int poles, PhaseBelts belts, int layers)
     {
         if (slots < 1) throw new ArgumentOutOfRangeException(nameof(slots), "at least one slot is needed");
         if (poles < 2 || poles % 2 != 0) throw new ArgumentOutOfRangeException(nameof(poles), "the pole count must be even and at least 2");
@@ -41,7 +42,7 @@ public static class Feasibility
     }
 
     /// <summary>The condition alone, without the search for neighbours (cheap: a few integer operations).</summary>
-    public static bool IsFeasible(int slots, int polePairs, PhaseBelts belts, int layers)
+    internal static bool IsFeasible(int slots, int polePairs, PhaseBelts belts, int layers)
     {
         if (slots < 1 || polePairs < 1) return false;
         if (polePairs % slots == 0) return false;   // one spoke: every slot sees the same EMF, no coil links flux
@@ -50,7 +51,7 @@ public static class Feasibility
     }
 
     /// <summary>True if turning the star of Q slots by the phase shift maps it onto itself (see remarks).</summary>
-    public static bool StarTurnsOntoItself(int slots, int polePairs, PhaseBelts belts)
+    internal static bool StarTurnsOntoItself(int slots, int polePairs, PhaseBelts belts)
     {
         long shift = (long)slots * belts.ShiftNumerator;
         if (shift % belts.ShiftDenominator != 0) return false;
@@ -62,7 +63,7 @@ public static class Feasibility
     /// The slot shift Δ (0 ≤ Δ &lt; Q) with p·Δ ≡ Q·φ/360° (mod Q) that carries each phase onto the
     /// next, or −1 if there is none. When several exist (t of them) the smallest is returned.
     /// </summary>
-    public static int PhaseStep(int slots, int polePairs, PhaseBelts belts)
+    internal static int PhaseStep(int slots, int polePairs, PhaseBelts belts)
     {
         long shift = (long)slots * belts.ShiftNumerator;
         if (shift % belts.ShiftDenominator != 0) return -1;
@@ -74,7 +75,7 @@ public static class Feasibility
     }
 
     /// <summary>The condition in words, with this machine's numbers ("Q/(m·t) = 9/(3·1) = 3 must be a whole number, ...").</summary>
-    public static string Describe(int slots, int polePairs, PhaseBelts belts, int layers)
+    internal static string Describe(int slots, int polePairs, PhaseBelts belts, int layers)
     {
         if (polePairs % slots == 0)
             return $"the star of slots needs at least two spokes, Q/t ≥ 2 with t = gcd(Q, p) = gcd({slots}, {polePairs}) = {slots}: every slot sees the same EMF";
@@ -102,7 +103,7 @@ public static class Feasibility
     }
 
     /// <summary>The nearest feasible slot counts below and above Q for the same poles and phases.</summary>
-    public static (int? Below, int? Above) NearestSlots(int slots, int poles, PhaseBelts belts, int layers)
+    internal static (int? Below, int? Above) NearestSlots(int slots, int poles, PhaseBelts belts, int layers)
     {
         int p = poles / 2;
         int? below = null, above = null;
@@ -116,7 +117,7 @@ public static class Feasibility
     }
 
     /// <summary>The nearest feasible pole counts below and above 2p for the same slots and phases (none if no pole count works).</summary>
-    public static (int? Below, int? Above) NearestPoles(int slots, int poles, PhaseBelts belts, int layers)
+    internal static (int? Below, int? Above) NearestPoles(int slots, int poles, PhaseBelts belts, int layers)
     {
         int p = poles / 2;
         int? below = null, above = null;

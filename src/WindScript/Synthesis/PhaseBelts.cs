@@ -12,7 +12,7 @@ namespace WindScript.Synthesis;
 /// boundary by rounding. Rotating the star by φ maps the sectors onto each other, which is what
 /// makes the synthesised phases identical copies displaced by φ.
 /// </remarks>
-public sealed class PhaseBelts
+internal sealed class PhaseBelts
 {
     private readonly int[] _sectorPhase;
     private readonly int[] _sectorSign;

@@ -11,12 +11,16 @@ namespace WindScript.Synthesis;
 /// </summary>
 public sealed record PitchRule(PitchRuleKind Kind, int Value = 0)
 {
+    /// <summary>The pole pitch (rounded as synth does).</summary>
     public static readonly PitchRule PolePitch = new(PitchRuleKind.PolePitch);
 
+    /// <summary>Every pitch from 1 slot to the pole pitch.</summary>
     public static readonly PitchRule UpToPolePitch = new(PitchRuleKind.UpToPolePitch);
 
+    /// <summary>A fixed pitch of <paramref name="slots"/> slots.</summary>
     public static PitchRule Fixed(int slots) => new(PitchRuleKind.Fixed, slots);
 
+    /// <summary>The pole pitch shortened by <paramref name="slots"/> slots.</summary>
     public static PitchRule Shortened(int slots) => new(PitchRuleKind.Shortened, slots);
 
     /// <summary>The longest pitch not exceeding the pole pitch Q/(2p), at least 1.</summary>
@@ -49,6 +53,7 @@ public sealed record PitchRule(PitchRuleKind Kind, int Value = 0)
     /// <summary>The most pitches <see cref="Candidates"/> can return for Q slots.</summary>
     public int MaxCandidates(int maxSlots) => Kind == PitchRuleKind.UpToPolePitch ? Math.Max(1, maxSlots / 2) : 1;
 
+    /// <summary>The rule as written on the command line (pole, pole-K, all, or a number).</summary>
     public override string ToString() => Kind switch
     {
         PitchRuleKind.PolePitch => "pole",
@@ -73,10 +78,15 @@ public sealed record PitchRule(PitchRuleKind Kind, int Value = 0)
     }
 }
 
+/// <summary>The kinds of pitch rule.</summary>
 public enum PitchRuleKind
 {
+    /// <summary>The pole pitch.</summary>
     PolePitch,
+    /// <summary>The pole pitch shortened by a number of slots.</summary>
     Shortened,
+    /// <summary>A fixed number of slots.</summary>
     Fixed,
+    /// <summary>Every pitch up to the pole pitch.</summary>
     UpToPolePitch,
 }

@@ -5,7 +5,7 @@ namespace WindScript.Synthesis;
 /// out thousands of windings without allocating): for every slot (0-based) and layer, the
 /// phase of the coil side there (−1 for none) and its sign (+1 go side of a forward coil).
 /// </summary>
-public sealed class StarLayout
+internal sealed class StarLayout
 {
     private int[] _phase;
     private int[] _sign;

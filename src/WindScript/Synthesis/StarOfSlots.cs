@@ -3,7 +3,7 @@ using WindScript.Model;
 namespace WindScript.Synthesis;
 
 /// <summary>What became of an attempt to lay out a winding with a given pitch.</summary>
-public enum LayoutOutcome
+internal enum LayoutOutcome
 {
     /// <summary>A balanced layout: every phase is the previous one shifted by <see cref="StarLayout.PhaseStep"/> slots.</summary>
     Balanced,
@@ -30,7 +30,7 @@ public enum LayoutOutcome
 /// along the chain s, s + y, s + 2y, ... (blocks of g = gcd(Q, y) slots), each laid out by its
 /// phasor; their returns fill the remaining slots.
 /// </summary>
-public static class StarOfSlots
+internal static class StarOfSlots
 {
     /// <summary>Lays out the winding into <paramref name="layout"/> (reused) and says whether it is balanced.</summary>
     public static LayoutOutcome Lay(int slots, int polePairs, PhaseBelts belts, int layers, int pitch, StarLayout layout)

@@ -9,6 +9,7 @@ namespace WindScript.Synthesis;
 /// <summary>The comment lines a synthesised file starts with: what it is, where the method comes from, its key figures.</summary>
 public static class SynthesisHeader
 {
+    /// <summary>Comment lines that describe a synthesis (counts, pitch, sections), for the top of the emitted file.</summary>
     public static ImmutableArray<string> Lines(SynthesisResult result)
     {
         if (result.Design is not { } d) return [];

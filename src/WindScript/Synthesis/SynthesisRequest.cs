@@ -8,11 +8,13 @@ namespace WindScript.Synthesis;
 /// </summary>
 public sealed record SynthesisRequest
 {
+    /// <summary>Number of slots Q.</summary>
     public required int Slots { get; init; }
 
     /// <summary>Number of poles 2p (even).</summary>
     public required int Poles { get; init; }
 
+    /// <summary>Number of phases m.</summary>
     public int Phases { get; init; } = 3;
 
     /// <summary>1 (single layer: one coil side per slot) or 2 (double layer: top and bottom).</summary>
@@ -21,13 +23,16 @@ public sealed record SynthesisRequest
     /// <summary>Coil pitch in slots; null takes <see cref="PitchRule.PolePitch"/>.</summary>
     public int? Pitch { get; init; }
 
+    /// <summary>Turns of every coil.</summary>
     public int TurnsPerCoil { get; init; } = 1;
 
+    /// <summary>Parallel paths per phase.</summary>
     public int Paths { get; init; } = 1;
 
     /// <summary>Machine block name; null gives "slots{Q}_poles{2p}".</summary>
     public string? MachineName { get; init; }
 
+    /// <summary>The winding block's name.</summary>
     public string WindingName { get; init; } = "main";
 
     /// <summary>Phase names in order; default U V W for up to three phases, then A, B, C, ...</summary>
@@ -48,8 +53,10 @@ public sealed record SynthesisRequest
         return null;
     }
 
+    /// <summary>The machine name, or one made from the counts.</summary>
     public string ResolvedMachineName => MachineName ?? $"slots{Slots}_poles{Poles}";
 
+    /// <summary>The phase names, or the defaults for the phase count.</summary>
     public ImmutableArray<string> ResolvedPhaseNames => PhaseNames.IsDefaultOrEmpty ? DefaultPhaseNames(Phases) : PhaseNames;
 
     /// <summary>U V W for up to three phases; A B C ... Z beyond; P1 P2 ... beyond 26.</summary>

@@ -11,8 +11,10 @@ namespace WindScript.Synthesis;
 /// </summary>
 public sealed record SynthesisResult
 {
+    /// <summary>The synthesised design, or null when none exists.</summary>
     public WindingDesign? Design { get; init; }
 
+    /// <summary>The balance condition and, when it fails, the nearest feasible counts.</summary>
     public required FeasibilityReport Feasibility { get; init; }
 
     /// <summary>The coil pitch used (or tried), in slots.</summary>
@@ -27,7 +29,9 @@ public sealed record SynthesisResult
     /// <summary>Single layer: true when every coil runs forward (the slot-pattern form applies).</summary>
     public bool ForwardCoils { get; init; }
 
+    /// <summary>Why synthesis failed (WS600x), empty on success.</summary>
     public ImmutableArray<Diagnostic> Diagnostics { get; init; } = [];
 
+    /// <summary>True if a design was synthesised.</summary>
     public bool Succeeded => Design is not null;
 }

@@ -12,6 +12,7 @@ namespace WindScript.Synthesis;
 /// </summary>
 public static class WindingSynthesizer
 {
+    /// <summary>A balanced winding for the request by the star of slots, or the diagnostics that say why none exists.</summary>
     public static SynthesisResult Synthesize(SynthesisRequest request)
     {
         if (request.Problem() is { } problem) throw new ArgumentException(problem, nameof(request));
@@ -49,7 +50,7 @@ public static class WindingSynthesizer
     /// not exceeding the pole pitch, and for a single layer the nearest one below (then above) that is
     /// balanced. <paramref name="pitchUsed"/> is the pitch laid out (the pole pitch if none works).
     /// </summary>
-    public static LayoutOutcome LayWithRule(int slots, int polePairs, PhaseBelts belts, int layers, int pitch, StarLayout layout, out int pitchUsed)
+    internal static LayoutOutcome LayWithRule(int slots, int polePairs, PhaseBelts belts, int layers, int pitch, StarLayout layout, out int pitchUsed)
     {
         if (pitch > 0)
         {
@@ -68,7 +69,7 @@ public static class WindingSynthesizer
     }
 
     /// <summary>Every pitch (1..Q−1) that gives a balanced winding with these counts.</summary>
-    public static IReadOnlyList<int> BalancedPitches(int slots, int polePairs, PhaseBelts belts, int layers)
+    internal static IReadOnlyList<int> BalancedPitches(int slots, int polePairs, PhaseBelts belts, int layers)
     {
         var layout = new StarLayout();
         var result = new List<int>();
@@ -78,7 +79,7 @@ public static class WindingSynthesizer
     }
 
     /// <summary>Builds the design of a balanced layout: one coil per go side, in slot order.</summary>
-    public static WindingDesign BuildDesign(SynthesisRequest request, PhaseBelts belts, StarLayout layout)
+    internal static WindingDesign BuildDesign(SynthesisRequest request, PhaseBelts belts, StarLayout layout)
     {
         int q = layout.Slots, y = layout.Pitch;
         var coils = ImmutableArray.CreateBuilder<Coil>(layout.Layers == 2 ? q : q / 2);
@@ -87,7 +88,7 @@ public static class WindingSynthesizer
             int polarity = layout.CoilAt(s);
             if (polarity == 0) continue;
             int phase = layout.PhaseAt(s, 0);
-            coils.Add(new Coil(phase, s + 1, (s + y) % q + 1, 0, layout.Layers == 2 ? 1 : 0, request.TurnsPerCoil, polarity));
+            coils.Add(new Coil { Phase = phase, GoSlot = s + 1, ReturnSlot = (s + y) % q + 1, GoLayer = 0, ReturnLayer = layout.Layers == 2 ? 1 : 0, Turns = request.TurnsPerCoil, Polarity = polarity });
         }
         var names = request.ResolvedPhaseNames;
         return new WindingDesign

@@ -4,7 +4,7 @@ using WindScript.Model;
 namespace WindScript.Text;
 
 /// <summary>A ratio in lowest terms as people write it: "3", "2/5", "12/17".</summary>
-public static class FractionText
+internal static class FractionText
 {
     public static string Of(long numerator, long denominator)
     {

@@ -8,6 +8,7 @@ public sealed class SourceText
 {
     private readonly int[] _lineStarts;
 
+    /// <summary>A text and the path that names it in diagnostics.</summary>
     public SourceText(string text, string path = "")
     {
         Text = text;
@@ -15,17 +16,22 @@ public sealed class SourceText
         _lineStarts = ComputeLineStarts(text);
     }
 
+    /// <summary>The whole text.</summary>
     public string Text { get; }
 
     /// <summary>The file path as the user gave it ("-" or "" for standard input).</summary>
     public string Path { get; }
 
+    /// <summary>Length in UTF-16 code units.</summary>
     public int Length => Text.Length;
 
+    /// <summary>Number of lines.</summary>
     public int LineCount => _lineStarts.Length;
 
+    /// <summary>Offset where a line (0-based) starts.</summary>
     public int LineStart(int line) => _lineStarts[line];
 
+    /// <summary>Line and column (0-based, UTF-16) of an offset.</summary>
     public LinePosition GetPosition(int offset)
     {
         offset = Math.Clamp(offset, 0, Text.Length);
@@ -34,6 +40,7 @@ public sealed class SourceText
         return new LinePosition(line, offset - _lineStarts[line]);
     }
 
+    /// <summary>Offset of a line and column (0-based), clamped to the line and the text.</summary>
     public int GetOffset(LinePosition position)
     {
         if (position.Line < 0) return 0;
@@ -43,6 +50,7 @@ public sealed class SourceText
         return Math.Min(start + Math.Max(0, position.Character), end);
     }
 
+    /// <summary>The text of a line (0-based), without its line break.</summary>
     public string GetLineText(int line)
     {
         int start = _lineStarts[line];
@@ -50,6 +58,7 @@ public sealed class SourceText
         return Text[start..end].TrimEnd('\r', '\n');
     }
 
+    /// <summary>The text inside a span (clipped to the text).</summary>
     public string Slice(TextSpan span) => Text.Substring(span.Start, Math.Min(span.Length, Text.Length - span.Start));
 
     private static int[] ComputeLineStarts(string text)

@@ -4,7 +4,7 @@ namespace WindScript.Units;
 /// Exponents of the base dimensions a winding description uses. Angle and slot pitch are kept
 /// as base dimensions of their own so that "phase 30" (no unit) or "pitch 7 mm" is caught.
 /// </summary>
-public readonly record struct Dimension(sbyte Mass, sbyte Length, sbyte Time, sbyte Current, sbyte Angle, sbyte Slots)
+internal readonly record struct Dimension(sbyte Mass, sbyte Length, sbyte Time, sbyte Current, sbyte Angle, sbyte Slots)
 {
     public static readonly Dimension None = default;
     public static readonly Dimension LengthDim = new(0, 1, 0, 0, 0, 0);

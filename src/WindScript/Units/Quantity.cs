@@ -3,7 +3,7 @@ using System.Globalization;
 namespace WindScript.Units;
 
 /// <summary>A value in SI (radians for angles) with its dimension.</summary>
-public readonly record struct Quantity(double Value, Dimension Dimension)
+internal readonly record struct Quantity(double Value, Dimension Dimension)
 {
     public static Quantity Plain(double value) => new(value, Dimension.None);
 

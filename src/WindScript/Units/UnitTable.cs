@@ -4,7 +4,7 @@ namespace WindScript.Units;
 /// Every unit the language accepts. Frequencies are stored as angular frequencies (rad/s), so
 /// "50 Hz", "314.159 rad/s" and "3000 rpm" are the same kind of quantity.
 /// </summary>
-public static class UnitTable
+internal static class UnitTable
 {
     public static readonly IReadOnlyList<Unit> All =
     [

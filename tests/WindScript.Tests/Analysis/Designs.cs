@@ -34,9 +34,9 @@ internal static class Designs
         {
             var (phase, sign) = Belt(s / q, phases);
             if (layers == 2)
-                coils.Add(new Coil(phase, s + 1, (s + pitch) % slots + 1, 0, 1, turns, sign));
+                coils.Add(new Coil { Phase = phase, GoSlot = s + 1, ReturnSlot = (s + pitch) % slots + 1, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = sign });
             else if (sign > 0)
-                coils.Add(new Coil(phase, s + 1, (s + phases * q) % slots + 1, 0, 0, turns, 1));
+                coils.Add(new Coil { Phase = phase, GoSlot = s + 1, ReturnSlot = (s + phases * q) % slots + 1, GoLayer = 0, ReturnLayer = 0, Turns = turns, Polarity = 1 });
         }
         return Create(slots, poles, phases, coils, layers, paths, geometry, drives: drives);
     }
@@ -57,7 +57,7 @@ internal static class Designs
             int sector = (int)Math.Floor(angle * 2 * phases + 1e-9) % (2 * phases);
             var (phase, sign) = Belt(sector, phases);
             int go = i + 1, back = (i + 1) % slots + 1;
-            coils.Add(layers == 2 ? new Coil(phase, go, back, 1, 0, turns, sign) : new Coil(phase, go, back, 0, 0, turns, sign));
+            coils.Add(layers == 2 ? new Coil { Phase = phase, GoSlot = go, ReturnSlot = back, GoLayer = 1, ReturnLayer = 0, Turns = turns, Polarity = sign } : new Coil { Phase = phase, GoSlot = go, ReturnSlot = back, GoLayer = 0, ReturnLayer = 0, Turns = turns, Polarity = sign });
         }
         return Create(slots, poles, phases, coils, layers, geometry: geometry, drives: drives);
     }

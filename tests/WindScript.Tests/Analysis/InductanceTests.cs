@@ -14,7 +14,7 @@ public class InductanceTests
     [Fact]
     public void Single_full_pitch_coil()
     {
-        var d = Designs.Create(12, 2, 1, [new Coil(0, 1, 7, 0, 0, 20, 1)], layers: 1, geometry: Core);
+        var d = Designs.Create(12, 2, 1, [new Coil { Phase = 0, GoSlot = 1, ReturnSlot = 7, GoLayer = 0, ReturnLayer = 0, Turns = 20, Polarity = 1 }], layers: 1, geometry: Core);
         var l = Inductances.Of(d, WindingSpectrum.Of(d), carter: 1)!;
         double r = 0.075 - 0.0005 / 2, mu = AirGapField.Mu0;
         double expected = mu * r * 0.12 * Math.PI * 400 / (2 * 0.0005);

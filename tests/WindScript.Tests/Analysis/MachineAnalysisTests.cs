@@ -99,7 +99,7 @@ public class DegenerateDesignTests
     [InlineData(12, 2, 0)]
     public void Odd_designs_evaluate_to_finite_figures(int slots, int poles, int phases)
     {
-        var coils = phases == 0 ? [] : new[] { new WindScript.Model.Coil(0, 1, slots, 0, 1, 3, 1) };
+        var coils = phases == 0 ? [] : new[] { new WindScript.Model.Coil { Phase = 0, GoSlot = 1, ReturnSlot = slots, GoLayer = 0, ReturnLayer = 1, Turns = 3 } };
         var d = Designs.Create(slots, poles, phases, coils, geometry: new WindScript.Model.Geometry { BoreDiameter = 0.1, StackLength = 0.1, Gap = 0.001 },
             drives: phases == 0 ? default : [Designs.Balanced(phases, 1, 50, 120)]);
         var r = MachineAnalysis.Evaluate(d);

@@ -12,7 +12,7 @@ public class MmfTests
     [Fact]
     public void Full_pitch_coil_gives_a_square_wave_of_half_its_turns()
     {
-        var d = Designs.Create(12, 2, 1, [new Coil(0, 1, 7, 0, 0, 20, 1)], layers: 1);
+        var d = Designs.Create(12, 2, 1, [new Coil { Phase = 0, GoSlot = 1, ReturnSlot = 7, GoLayer = 0, ReturnLayer = 0, Turns = 20, Polarity = 1 }], layers: 1);
         var n = TurnsFunction.FromConductors(d.Conductors.SlotConductors(0));
         Assert.Equal(10, n.ValueAt(Math.PI / 2), 12);
         Assert.Equal(-10, n.ValueAt(3 * Math.PI / 2), 12);

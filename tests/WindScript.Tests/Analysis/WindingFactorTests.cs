@@ -116,7 +116,7 @@ public class WindingFactorTests
     {
         // Its conductor pattern equals belts of 12 with pitch 1, whose sides cancel inside the belt:
         // k_d·k_p = 0.083 there, while the lone coil has k = 1 (common practice).
-        var d = Designs.Create(24, 2, 1, [new Coil(0, 1, 13, 0, 0, 50, 1)], layers: 1);
+        var d = Designs.Create(24, 2, 1, [new Coil { Phase = 0, GoSlot = 1, ReturnSlot = 13, GoLayer = 0, ReturnLayer = 0, Turns = 50, Polarity = 1 }], layers: 1);
         Assert.Null(RegularWinding.TryRecognise(d));
         Assert.Equal(1, Factors(d, 0, 1)[0], 12);
     }
@@ -125,7 +125,7 @@ public class WindingFactorTests
     public void A_slot_whose_layers_cancel_lowers_the_factor()
     {
         // Two coils of one phase with opposite sides in slot 4: the sides count, their currents cancel.
-        var coils = new[] { new Coil(0, 1, 4, 0, 1, 5, 1), new Coil(0, 4, 6, 0, 1, 5, 1) };
+        var coils = new[] { new Coil { Phase = 0, GoSlot = 1, ReturnSlot = 4, GoLayer = 0, ReturnLayer = 1, Turns = 5, Polarity = 1 }, new Coil { Phase = 0, GoSlot = 4, ReturnSlot = 6, GoLayer = 0, ReturnLayer = 1, Turns = 5, Polarity = 1 } };
         var d = Designs.Create(6, 2, 1, coils);
         var f = Factors(d, 0, 1);
         Assert.Equal(0.25, f[0], 12);   // |5 e^(−j30°) − 5 e^(−j330°)| = 5, over 4 sides of 5 turns

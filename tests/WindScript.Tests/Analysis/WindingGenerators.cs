@@ -38,7 +38,7 @@ public static class WindingGenerators
         from turns in Gen.Choose(1, 30)
         from polarity in Gen.Elements(-1, 1)
         from goLayer in Gen.Choose(0, 1)
-        select new Coil(phase, go, (go - 1 + span) % slots + 1, goLayer, 1 - goLayer, turns, polarity);
+        select new Coil { Phase = phase, GoSlot = go, ReturnSlot = (go - 1 + span) % slots + 1, GoLayer = goLayer, ReturnLayer = 1 - goLayer, Turns = turns, Polarity = polarity };
 
     public static Arbitrary<AnyWinding> Any() =>
         (from slots in Gen.Choose(2, 60)
@@ -74,7 +74,7 @@ public static class WindingGenerators
             select new RegularCandidate(Designs.Rotated(Designs.IntegralSlot(6 * q * pairs, 2 * pairs, pitch, layers), shift)),
             from q in Gen.Choose(1, 12)
             from span in Gen.Choose(1, 2 * q)
-            select new RegularCandidate(Designs.Create(2 * q, 2, 1, [new Coil(0, 1, 1 + span % (2 * q), 0, 0, 5, 1)], layers: 1)))
+            select new RegularCandidate(Designs.Create(2 * q, 2, 1, [new Coil { Phase = 0, GoSlot = 1, ReturnSlot = 1 + span % (2 * q), GoLayer = 0, ReturnLayer = 0, Turns = 5, Polarity = 1 }], layers: 1)))
         .ToArbitrary();
 
     private static WindingDesign Copies(int slots, int poles, int phases, Coil[] first)

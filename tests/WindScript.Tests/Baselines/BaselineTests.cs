@@ -72,5 +72,11 @@ public class BaselineTests
         int width = end.Line == start.Line ? Math.Max(1, end.Character - start.Character) : Math.Max(1, line.Length - start.Character);
         sb.AppendLine($"{start.Line + 1,4} | {line}");
         sb.AppendLine($"     | {new string(' ', start.Character)}{new string('^', width)} {DiagnosticText.SeverityName(d.Severity)} {d.Code}: {d.Message}");
+        foreach (var related in d.Related)
+        {
+            var at = c.Source.GetPosition(related.Span.Start);
+            sb.AppendLine($"     |   related ({at.Line + 1},{at.Character + 1}): {related.Message}");
+        }
+        if (d.Fix is { } fix) sb.AppendLine($"     |   fix: {fix.Title}");
     }
 }

@@ -119,7 +119,7 @@ public class EvaluatorTests
     [Fact]
     public void Loops_generate_one_coil_per_value_inclusive_of_both_ends()
     {
-        var d = Wind.Design(Wind.Machine36 + """
+        var d = Wind.Evaluated(Wind.Machine36 + """
             winding w {
               layers 2
               for k in 0 .. 11 {
@@ -268,7 +268,7 @@ public class EvaluatorTests
     [Fact]
     public void Groups_carry_their_name_and_may_override_turns()
     {
-        var d = Wind.Design(Wind.Machine36 + """
+        var d = Wind.Evaluated(Wind.Machine36 + """
             winding w {
               layers 2
               turns 3

@@ -90,7 +90,10 @@ public class FaithfulTreeTests
         var c = Wind.Compile(text);
         var opposing = c.Diagnostics.Where(d => d.Code == "WS3015").ToList();
         Assert.Equal(3, opposing.Count);
-        var all = opposing.SelectMany(d => d.Fix!.Edits).ToArray();
+        // The same mistake in every phase: reversing one alone would unbalance the winding, so
+        // each warning offers the one fix that reverses all three.
+        var all = opposing[0].Fix!.Edits;
+        Assert.All(opposing, d => Assert.Equal(all, d.Fix!.Edits));
         var fixedText = Apply(text, new WindScript.Diagnostics.CodeFix("all", all));
         Assert.Contains("coil U: 3 -> 9", fixedText, StringComparison.Ordinal);
         Assert.Contains("coil V: 7 -> 1", fixedText, StringComparison.Ordinal);
