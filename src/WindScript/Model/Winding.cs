@@ -41,6 +41,6 @@ public sealed record Winding
     public TextSpan ConductorsPerSlotSpan { get; init; }
     /// <summary>Where <c>layers</c> is written (empty if it is not).</summary>
     public TextSpan LayersSpan { get; init; }
-    /// <summary>Where <c>pitch</c> is written (empty if it is not).</summary>
+    /// <summary>Where the winding's own <c>pitch</c> is written (empty if it is not).</summary>
     public TextSpan PitchSpan { get; init; }
 }
