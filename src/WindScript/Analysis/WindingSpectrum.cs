@@ -55,14 +55,18 @@ internal sealed class WindingSpectrum
         var baseBands = new Complex[m * band];
         var sideTurns = new int[m];
         var conductors = new int[m][];
-        var scaled = new double[q];
+        var scaled = new double[m][];
         for (int k = 0; k < m; k++)
         {
             conductors[k] = new int[q];
             sideTurns[k] = WindingFactors.SumLayers(design.Conductors, k, conductors[k]);
-            for (int s = 0; s < q; s++) scaled[s] = conductors[k][s] / paths;
-            SlotSpectrum.ComputeBaseBand(scaled, baseBands.AsSpan(k * band, band));
+            scaled[k] = new double[q];
+            for (int s = 0; s < q; s++) scaled[k][s] = conductors[k][s] / paths;
         }
+        // Phases in pairs: one transform serves two real distributions.
+        for (int k = 0; k + 1 < m; k += 2)
+            SlotSpectrum.ComputeBaseBands(scaled[k], scaled[k + 1], baseBands.AsSpan(k * band, band), baseBands.AsSpan((k + 1) * band, band));
+        if (m % 2 == 1) SlotSpectrum.ComputeBaseBand(scaled[m - 1], baseBands.AsSpan((m - 1) * band, band));
         return new WindingSpectrum(q, m, design.PolePairs, paths, baseBands, sideTurns, conductors);
     }
 

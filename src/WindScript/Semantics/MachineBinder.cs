@@ -47,7 +47,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                     }
                     facts = facts with { Phases = BindPhases(phases, scope), PhasesSpan = phases.Span };
                     break;
-                case PropertySyntax p when IsMachineProperty(p.Keyword.Text):
+                case PropertySyntax p when p.Property.In(BlockKind.Machine):
                     if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
                     (facts, geometry) = BindProperty(p, scope, facts, geometry);
                     break;
@@ -58,9 +58,6 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         }
         return facts with { Geometry = geometry };
     }
-
-    private static bool IsMachineProperty(string keyword) => keyword is "slots" or "poles" or "bore" or "stack" or "gap"
-        or "slot_opening" or "rotor_radius" or "skew" or "phase_shift" or "gap_flux_density";
 
     private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
     {
@@ -96,11 +93,11 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             return v;
         }
 
-        switch (p.Keyword.Text)
+        switch (p.Property.Name)
         {
-            case "slots":
+            case PropertyName.Slots:
                 return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, limit: InputLimits.MaxSlots), SlotsSpan = p.Span }, g);
-            case "poles":
+            case PropertyName.Poles:
                 var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, limit: InputLimits.MaxPoles);
                 if (poles is { } n && n % 2 != 0)
                 {
@@ -108,16 +105,16 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                     poles = null;
                 }
                 return (facts with { Poles = poles, PolesSpan = p.Span }, g);
-            case "bore": return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
-            case "stack": return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
-            case "gap": return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
-            case "slot_opening": return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
-            case "rotor_radius": return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
-            case "gap_flux_density":
+            case PropertyName.Bore: return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
+            case PropertyName.Stack: return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
+            case PropertyName.Gap: return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
+            case PropertyName.SlotOpening: return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
+            case PropertyName.RotorRadius: return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case PropertyName.GapFluxDensity:
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
-            case "phase_shift":
+            case PropertyName.PhaseShift:
                 return (facts with { PhaseShiftDegrees = evaluator.EvaluateAs(p.Value, scope, Dimension.AngleDim, "the phase shift") * 180 / Math.PI }, g);
-            case "skew":
+            case PropertyName.Skew:
                 // In slot pitches, or as a mechanical angle (converted once the slot count is known).
                 if (evaluator.Evaluate(p.Value, scope) is { } q)
                 {
