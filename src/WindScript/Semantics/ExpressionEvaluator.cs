@@ -164,8 +164,8 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, $"{f}() takes whole numbers");
             return null;
         }
-        long g = Model.WindingDesign.Gcd((long)a.Value, (long)b.Value);
-        return Quantity.Plain(f == "gcd" ? g : Model.WindingDesign.Lcm((long)a.Value, (long)b.Value));
+        long g = WindScript.Numerics.IntegerMath.Gcd((long)a.Value, (long)b.Value);
+        return Quantity.Plain(f == "gcd" ? g : WindScript.Numerics.IntegerMath.Lcm((long)a.Value, (long)b.Value));
     }
 
     // ---- typed evaluation with the diagnostics a designer needs ------------------------------
