@@ -44,7 +44,7 @@ public sealed class Compilation
     {
         var syntax = SyntaxTree.Parse(source);
         // A refused file has nothing to evaluate: its one diagnostic says why.
-        var semantics = syntax.TooDeep ? new SemanticBinder.Result(null, new SemanticModel(), []) : SemanticBinder.Bind(syntax);
+        var semantics = syntax.Refused ? new SemanticBinder.Result(null, new SemanticModel(), []) : SemanticBinder.Bind(syntax);
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)

@@ -47,7 +47,7 @@ internal sealed class SlotPatternBinder(
         int repeat = 1;
         if (pattern.Repeat is { } r)
         {
-            if (evaluator.EvaluateInteger(r, scope, "a repeat count", 1) is not { } count)
+            if (evaluator.EvaluateInteger(r, scope, "a repeat count", 1, limit: (int)ExpansionBudget.Limit) is not { } count)
             {
                 collector.Broken.Add(layer);
                 return;
