@@ -239,10 +239,11 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         {
             $"Q = {d.Slots} slots, 2p = {d.Poles} poles, m = {d.Phases.Length} phases ({string.Join(" ", d.Phases.Select(x => x.Name))})",
             $"slots per pole and phase q = {Numbers.Fraction(d.Slots, d.Poles * d.Phases.Length)}; pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots",
-            $"slot pitch {Numbers.Show(360.0 * p / d.Slots, 3)}° electrical; periodicity t = gcd(Q, p) = {d.Periodicity}; cogging order lcm(Q, 2p) = {WindingDesign.Lcm(d.Slots, d.Poles)}",
+            $"slot pitch {Numbers.Show(360.0 * p / d.Slots, 3)}° electrical; periodicity t = gcd(Q, p) = {d.Periodicity}; cogging order lcm(Q, 2p) = {WindScript.Numerics.IntegerMath.Lcm(d.Slots, d.Poles)}",
         };
         var g = d.Geometry;
         var dims = new List<string>();
+        if (g.RotorOutside) dims.Add("rotor outside");
         if (g.BoreDiameter is { } bore) dims.Add($"bore {Numbers.Show(bore * 1000, 2)} mm");
         if (g.StackLength is { } stack) dims.Add($"stack {Numbers.Show(stack * 1000, 2)} mm");
         if (g.EffectiveMechanicalGap is { } gap) dims.Add($"gap {Numbers.Show(gap * 1000, 3)} mm");
@@ -308,6 +309,13 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
             lines.Add($"rotating field at {Numbers.Show(omega / (2 * Math.PI), 3)} Hz: ω/p = {Numbers.Show(mech, 2)} rad/s = {Numbers.Show(mech * 60 / (2 * Math.PI), 2)} rpm mechanical (p = {p})");
         }
         if (omegas.Length == 0 && drive.Currents.Any(x => !x.Components.IsEmpty)) lines.Add("direct current only: a standing field (speed 0)");
+        // The gap field at t = 0, with the caution eval and the report give beside it.
+        var evaluated = Analysis.MachineAnalysis.Evaluate(d, new Analysis.AnalysisOptions { MaxElectricalOrder = 1 }).Drives.FirstOrDefault(x => x.Name == drive.Name);
+        if (evaluated?.PeakField is { } f)
+        {
+            lines.Add($"peak gap field at t = 0: {Numbers.Show(f.FluxDensity, 3)} T thin gap (Carter), 2-D {Numbers.Show(f.ExactFluxDensityAtRotor, 3)} T at the rotor");
+            if (Analysis.FieldCaution.For(f) is { } caution) lines.Add("caution: " + caution);
+        }
         return lines;
     }
 

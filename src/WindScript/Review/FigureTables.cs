@@ -28,6 +28,7 @@ internal static class FigureTables
             Row("layers", a, b, d => d.Winding.Layers),
             Row("parallel paths", a, b, d => d.Winding.Paths),
             Row("coils", a, b, d => d.Winding.Coils.Length),
+            Row("rotor outside (1 = yes)", a, b, d => d.Geometry.RotorOutside ? 1 : 0),
             Row("bore diameter", a, b, d => Mm(d.Geometry.BoreDiameter), "mm"),
             Row("stack length", a, b, d => Mm(d.Geometry.StackLength), "mm"),
             Row("air gap", a, b, d => Mm(d.Geometry.Gap), "mm"),
@@ -92,9 +93,9 @@ internal static class FigureTables
 
     public static ImmutableArray<FigureRow> MmfFigures(AnalysisResult? a, AnalysisResult? b) =>
     [
-        new("working wave per ampere", a?.Balanced.WorkingWave, b?.Balanced.WorkingWave, "A-turns/A"),
+        new("rotating working wave per ampere (all phases)", a?.Balanced.WorkingWave, b?.Balanced.WorkingWave, "A/A"),
         new("THD (orders to 25p)", Thd(a) * 100, Thd(b) * 100, "%"),
-        new("differential leakage", a?.DifferentialLeakage * 100, b?.DifferentialLeakage * 100, "%"),
+        new("differential leakage coefficient", a?.DifferentialLeakage, b?.DifferentialLeakage, ""),
         new("machine periodicity t", a?.Machine.Periodicity, b?.Machine.Periodicity),
         new("winding periodicity", a?.Machine.WindingPeriodicity, b?.Machine.WindingPeriodicity),
         new("cogging order", a?.Machine.CoggingOrder, b?.Machine.CoggingOrder),
@@ -137,7 +138,7 @@ internal static class FigureTables
         foreach (var drive in drives)
         {
             DriveAnalysis? x = a?.Drives.FirstOrDefault(d => d.Name == drive), y = b?.Drives.FirstOrDefault(d => d.Name == drive);
-            rows.Add(new($"drive {drive}: peak MMF at t = 0", x?.PeakMmf, y?.PeakMmf, "A-turns"));
+            rows.Add(new($"drive {drive}: peak MMF at t = 0", x?.PeakMmf, y?.PeakMmf, "A"));
             if (x?.FundamentalField is not null || y?.FundamentalField is not null)
                 rows.Add(new($"drive {drive}: fundamental B at t = 0", x?.FundamentalField?.FluxDensity, y?.FundamentalField?.FluxDensity, "T"));
         }

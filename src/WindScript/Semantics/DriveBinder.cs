@@ -46,7 +46,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     sequence = BindBalanced(balanced, scope, components, assigned, spans);
                     break;
                 default:
-                    BlockReader.ReportMisplaced(diagnostics, statement, "a drive block");
+                    BlockRules.ReportMisplaced(diagnostics, statement, "a drive block");
                     break;
             }
         }

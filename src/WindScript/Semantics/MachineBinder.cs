@@ -32,38 +32,60 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         var facts = new MachineFacts { Name = block.Name.Text, Span = block.Span, KeywordSpan = block.Keyword.Span };
         var seen = new Dictionary<string, PropertySyntax>();
         var geometry = new Geometry();
+        // Read in passes, so that statement order never changes meaning: the values first (in
+        // source order among themselves), then the counts other properties depend on (skew in
+        // degrees needs the slot count), then everything else.
+        foreach (var let in block.Body.OfType<LetSyntax>())
+            LetBinder.Bind(let, scope, evaluator, diagnostics, model);
         foreach (var statement in block.Body)
         {
             switch (statement)
             {
-                case LetSyntax let:
-                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
-                    break;
                 case PhasesSyntax phases:
                     if (!facts.Phases.IsDefaultOrEmpty)
                     {
-                        diagnostics.Add(DiagnosticCatalog.RepeatedProperty, phases.Keyword.Span, "'phases' is already given in this block");
+                        diagnostics.Add(DiagnosticCatalog.RepeatedProperty, phases.Keyword.Span, $"'{Vocabulary.PhasesWord}' is already given in this block");
                         break;
                     }
                     facts = facts with { Phases = BindPhases(phases, scope), PhasesSpan = phases.Span };
                     break;
+                case PropertySyntax p when IsCount(p):
+                    if (!BlockRules.FirstTime(diagnostics, seen, p)) break;
+                    (facts, geometry) = BindProperty(p, scope, facts, geometry);
+                    break;
+            }
+        }
+        foreach (var statement in block.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax or PhasesSyntax:
+                case PropertySyntax p0 when IsCount(p0):
+                    break; // read above
                 case PropertySyntax p when p.Property.In(BlockKind.Machine):
-                    if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
+                    if (!BlockRules.FirstTime(diagnostics, seen, p)) break;
                     (facts, geometry) = BindProperty(p, scope, facts, geometry);
                     break;
                 default:
-                    BlockReader.ReportMisplaced(diagnostics, statement, "a machine block");
+                    BlockRules.ReportMisplaced(diagnostics, statement, "a machine block");
                     break;
             }
         }
         return facts with { Geometry = geometry };
     }
 
+    private static bool IsCount(PropertySyntax p) => p.Property.Name is PropertyName.Slots or PropertyName.Poles;
+
     private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
     {
         var list = ImmutableArray.CreateBuilder<Phase>();
         foreach (var name in phases.Names)
         {
+            if (list.Count == InputLimits.MaxPhases)
+            {
+                diagnostics.Add(DiagnosticCatalog.BeyondLimit, name.Span, $"more than {InputLimits.MaxPhases} phases is beyond the limit ('windscript explain WS2040')");
+                break;
+            }
             if (list.Any(p => p.Name == name.Text))
             {
                 diagnostics.Add(DiagnosticCatalog.DuplicateName, name.Span, $"phase '{name.Text}' is declared twice");
@@ -91,9 +113,9 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         switch (p.Property.Name)
         {
             case PropertyName.Slots:
-                return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, 100_000), SlotsSpan = p.Span }, g);
+                return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, limit: InputLimits.MaxSlots), SlotsSpan = p.Span }, g);
             case PropertyName.Poles:
-                var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, 100_000);
+                var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, limit: InputLimits.MaxPoles);
                 if (poles is { } n && n % 2 != 0)
                 {
                     diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"the pole count must be even (north and south poles pair up), not {n}");
@@ -105,6 +127,12 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case PropertyName.Gap: return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
             case PropertyName.SlotOpening: return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
             case PropertyName.RotorRadius: return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case PropertyName.Rotor:
+                // `rotor outside` (hub and fan motors) or `rotor inside` (the default).
+                if (p.Value is NameExpressionSyntax { Name.Text: "outside" or "inside" } word)
+                    return (facts, g with { RotorOutside = word.Name.Text == "outside" });
+                diagnostics.Add(DiagnosticCatalog.RotorPositionUnknown, p.Value.Span, "'rotor' takes 'inside' or 'outside'");
+                return (facts, g);
             case PropertyName.GapFluxDensity:
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
             case PropertyName.PhaseShift:
@@ -113,6 +141,8 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                 // In slot pitches, or as a mechanical angle (converted once the slot count is known).
                 if (evaluator.Evaluate(p.Value, scope) is { } q)
                 {
+                    bool known = q.Dimension == Dimension.SlotDim || q.Dimension == Dimension.AngleDim && facts.Slots is not null;
+                    if (known && evaluator.WithinMagnitude(p.Value, q.Value, "the skew") is null) return (facts, g);
                     if (q.Dimension == Dimension.SlotDim) return (facts, g with { SkewSlots = q.Value });
                     if (q.Dimension == Dimension.AngleDim && facts.Slots is { } slots) return (facts, g with { SkewSlots = q.Value * slots / (2 * Math.PI) });
                     evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");

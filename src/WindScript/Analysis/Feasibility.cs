@@ -1,6 +1,6 @@
 using WindScript.Model;
 
-namespace WindScript.Synthesis;
+namespace WindScript.Analysis;
 
 /// <summary>
 /// Whether Q slots, 2p poles and m phases admit a balanced winding, by the star of slots
@@ -55,7 +55,7 @@ public static class Feasibility
     {
         long shift = (long)slots * belts.ShiftNumerator;
         if (shift % belts.ShiftDenominator != 0) return false;
-        long t = WindingDesign.Gcd(slots, polePairs);
+        long t = WindScript.Numerics.IntegerMath.Gcd(slots, polePairs);
         return shift / belts.ShiftDenominator % t == 0;
     }
 
@@ -83,10 +83,10 @@ public static class Feasibility
         {
             if (slots % 2 != 0)
                 return $"a single-layer winding has one coil side per slot and two per coil, so Q must be even (Q = {slots})";
-            long tStar = WindingDesign.Gcd(slots / 2, polePairs);
+            long tStar = WindScript.Numerics.IntegerMath.Gcd(slots / 2, polePairs);
             return $"{Quotient(slots, 2, belts, tStar, "t*")} must be a whole number, with t* = gcd(Q/2, p) = gcd({slots / 2}, {polePairs}) = {tStar}";
         }
-        long t = WindingDesign.Gcd(slots, polePairs);
+        long t = WindScript.Numerics.IntegerMath.Gcd(slots, polePairs);
         return $"{Quotient(slots, 1, belts, t, "t")} must be a whole number, with t = gcd(Q, p) = gcd({slots}, {polePairs}) = {t}";
     }
 
@@ -110,7 +110,8 @@ public static class Feasibility
         for (int q = slots - 1; q >= 1; q--)
             if (IsFeasible(q, p, belts, layers)) { below = q; break; }
         // Q = 2·p·d (an integral-slot winding with q = 1 for 360/m) is always feasible, so the search ends.
-        int limit = slots + 2 * p * belts.ShiftDenominator + 2;
+        // Counts beyond the limits are not offered: nothing could evaluate them.
+        int limit = (int)Math.Min(InputLimits.MaxSlots, (long)slots + 2L * p * belts.ShiftDenominator + 2);
         for (int q = slots + 1; q <= limit; q++)
             if (IsFeasible(q, p, belts, layers)) { above = q; break; }
         return (below, above);
@@ -124,7 +125,7 @@ public static class Feasibility
         for (int pp = p - 1; pp >= 1; pp--)
             if (IsFeasible(slots, pp, belts, layers)) { below = 2 * pp; break; }
         // The star depends on p only modulo Q, so one period of p values settles it.
-        for (int pp = p + 1; pp <= p + Math.Max(1, slots); pp++)
+        for (int pp = p + 1; pp <= Math.Min(InputLimits.MaxPoles / 2, (long)p + Math.Max(1, slots)); pp++)
             if (IsFeasible(slots, pp, belts, layers)) { above = 2 * pp; break; }
         return (below, above);
     }
