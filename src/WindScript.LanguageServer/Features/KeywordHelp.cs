@@ -18,8 +18,8 @@ public static class KeywordHelp
         ["gap"] = "gap LENGTH — radial mechanical air gap",
         ["slot_opening"] = "slot_opening LENGTH — slot opening width at the bore (for Carter's coefficient)",
         ["rotor_radius"] = "rotor_radius LENGTH — rotor outer radius (for a thick gap)",
-        ["skew"] = "skew N slots | ANGLE — skew of the stator slots",
-        ["phase_shift"] = "phase_shift ANGLE — electrical angle between successive phase axes (default 360/m)",
+        ["skew"] = "skew N slots | ANGLE — skew of the stator slots; an angle here is mechanical (around the bore): write electrical(ANGLE) to give it in electrical degrees",
+        ["phase_shift"] = "phase_shift ANGLE — electrical angle between successive phase axes (default 360/m); write mechanical(ANGLE) to give it around the bore",
         ["gap_flux_density"] = "gap_flux_density T — peak fundamental air-gap flux density (for back-EMF)",
         ["layers"] = "layers 1|2 — coil sides per slot",
         ["turns"] = "turns N — turns per coil",
@@ -42,8 +42,8 @@ public static class KeywordHelp
         ["dc"] = "dc CURRENT — direct current",
         ["peak"] = "peak — the amplitude is the peak value Î",
         ["rms"] = "rms — the amplitude is the rms value (Î = √2·I)",
-        ["at"] = "at FREQUENCY — the frequency of a sinusoid (Hz, rad/s or rpm)",
-        ["phase"] = "phase ANGLE — the time phase angle φ of a sinusoid",
+        ["at"] = "at FREQUENCY — the frequency of a sinusoid (Hz or rad/s; a speed in rpm is refused: the synchronous frequency is n·p/60)",
+        ["phase"] = "phase ANGLE — the time phase angle φ of a sinusoid, an electrical angle",
     };
 
     public static string? For(string keyword) => Help.GetValueOrDefault(keyword);

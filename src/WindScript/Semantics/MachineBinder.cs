@@ -32,7 +32,8 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         var facts = new MachineFacts { Name = block.Name.Text, Span = block.Span, KeywordSpan = block.Keyword.Span };
         var seen = new Dictionary<string, PropertySyntax>();
         var geometry = new Geometry();
-        foreach (var statement in block.Body)
+        // Slots and poles first, wherever they stand: an angle in slots or in electrical degrees converts through them.
+        foreach (var statement in block.Body.OrderBy(s => s is PropertySyntax { Keyword.Text: "slots" or "poles" } ? 0 : 1))
         {
             switch (statement)
             {
@@ -102,6 +103,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                     diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"the pole count must be even (north and south poles pair up), not {n}");
                     poles = null;
                 }
+                if (poles is { } pairsOf) evaluator.PolePairs = pairsOf / 2;
                 return (facts with { Poles = poles, PolesSpan = p.Span }, g);
             case "bore": return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
             case "stack": return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
@@ -111,14 +113,17 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case "gap_flux_density":
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
             case "phase_shift":
-                return (facts with { PhaseShiftDegrees = evaluator.EvaluateAs(p.Value, scope, Dimension.AngleDim, "the phase shift") * 180 / Math.PI }, g);
+                // An electrical angle: the spacing of the phase axes in electrical degrees.
+                return (facts with { PhaseShiftDegrees = evaluator.EvaluateAngle(p.Value, scope, AngleKind.Electrical, "the phase shift") * 180 / Math.PI }, g);
             case "skew":
-                // In slot pitches, or as a mechanical angle (converted once the slot count is known).
-                if (evaluator.Evaluate(p.Value, scope) is { } q)
+                // In slot pitches, or as a mechanical angle around the bore (converted through the slot count).
+                if (evaluator.EvaluateInAngleContext(p.Value, scope, AngleKind.Mechanical) is { } q)
                 {
                     if (q.Dimension == Dimension.SlotDim) return (facts, g with { SkewSlots = q.Value });
                     if (q.Dimension == Dimension.AngleDim && facts.Slots is { } slots) return (facts, g with { SkewSlots = q.Value * slots / (2 * Math.PI) });
-                    evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");
+                    if (q.Dimension.IsNone) evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");
+                    else if (q.Dimension != Dimension.AngleDim)
+                        diagnostics.Add(DiagnosticCatalog.WrongDimension, p.Value.Span, $"the skew must be a number of slots or a mechanical angle, but this is {q.Dimension.Describe()}");
                 }
                 return (facts, g);
         }
