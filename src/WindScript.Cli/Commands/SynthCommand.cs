@@ -86,5 +86,5 @@ public static class SynthCommand
     }
 
     private static bool IsName(string name) =>
-        name.Length > 0 && Syntax.Lexer.IsWordStart(name[0]) && name.All(Syntax.Lexer.IsWordPart) && !Syntax.Keywords.IsReserved(name);
+        name.Length > 0 && Syntax.Lexer.IsWordStart(name[0]) && name.All(Syntax.Lexer.IsWordPart) && !Syntax.Vocabulary.IsReserved(name);
 }

@@ -76,7 +76,8 @@ public static class EvalAnalysisText
     {
         if (r.Inductances is not { } l) return;
         o.WriteLine();
-        o.WriteLine($"air-gap inductances, mH (winding functions, effective gap {F(l.EffectiveGap * 1000, 4)} mm, mean radius {F(l.MeanRadius * 1000, 3)} mm)");
+        string permeance = l.ThickGap ? "thick gap: 2-D permeance for v <= Q/2" : "thin gap";
+        o.WriteLine($"air-gap inductances, mH (winding functions, {permeance}, effective gap {F(l.EffectiveGap * 1000, 4)} mm, mean radius {F(l.MeanRadius * 1000, 3)} mm)");
         o.Write($"  {"",-6}");
         foreach (var p in r.Phases) o.Write($" {p.Name,10}");
         o.WriteLine();
@@ -86,7 +87,7 @@ public static class EvalAnalysisText
             foreach (double v in l.Matrix[k]) o.Write($" {G(v * 1000),10}");
             o.WriteLine();
         }
-        Row(o, "balanced (synchronous)", $"{G(l.Synchronous * 1000)} mH");
+        Row(o, "balanced (synchronous)", $"{G(l.Synchronous * 1000)} mH (magnetising x (1 + differential leakage))");
     }
 
     private static void WriteBackEmf(TextWriter o, AnalysisResult r)
@@ -107,10 +108,15 @@ public static class EvalAnalysisText
         if (d.PeakField is { } f)
         {
             Row(o, "peak field, thin gap", $"B {G(f.FluxDensity)} T, H {G(f.FieldStrength / 1000)} kA/m (Carter)");
-            Row(o, "peak field, radial", $"rotor {G(f.RadialFluxDensityAtRotor)} T, bore {G(f.RadialFluxDensityAtBore)} T, constant {G(f.ConstantFieldFluxDensity)} T " +
-                $"(rotor {Pct(f.RotorDeviation)}, bore {Pct(f.BoreDeviation)})");
+            Row(o, "peak field, 2-D", $"rotor {G(f.ExactFluxDensityAtRotor)} T, bore {G(f.ExactFluxDensityAtBore)} T (smooth gap; bore at the tooth centres)");
+            Row(o, "peak field, flux tube", $"rotor {G(f.RadialFluxDensityAtRotor)} T ({Pct(f.FluxTubeDeviationAtRotor)} vs 2-D), bore {G(f.RadialFluxDensityAtBore)} T ({Pct(f.FluxTubeDeviationAtBore)} vs 2-D)");
+            if (FieldCaution.For(f) is { } caution) Row(o, "  caution", caution);
         }
-        if (d.FundamentalField is { } b1) Row(o, "fundamental B1", $"{G(b1.FluxDensity)} T (MMF {G(b1.Mmf)} A)");
+        if (d.FundamentalField is { } b1)
+        {
+            Row(o, "fundamental B1", $"{G(b1.FluxDensity)} T thin gap (MMF {G(b1.Mmf)} A); 2-D rotor {G(b1.ExactFluxDensityAtRotor)} T, bore {G(b1.ExactFluxDensityAtBore)} T");
+            Row(o, "B1, flux tube", $"rotor {G(b1.RadialFluxDensityAtRotor)} T ({Pct(b1.FluxTubeDeviationAtRotor)} vs 2-D), bore {G(b1.RadialFluxDensityAtBore)} T ({Pct(b1.FluxTubeDeviationAtBore)} vs 2-D)");
+        }
         if (d.BackEmfFrequencyHz is { } hz)
             Row(o, $"back-EMF at {G(hz)} Hz", string.Join("  ", r.Phases.Select(p => $"{p.Name} {G(d.BackEmfRms[p.Index])} V rms")));
         o.WriteLine($"  {"v",5} {"n",8} {"f Hz",8} {"forward A",11} {"backward A",11} {"standing A",11} {"speed rpm",10}  kind (+ speed: towards higher slot numbers)");

@@ -14,18 +14,16 @@ namespace WindScript.LanguageServer.Features;
 /// </summary>
 public static class Completion
 {
-    private static readonly string[] TopLevel = ["machine", "winding", "drive", "let"];
-    private static readonly string[] MachineBody = ["slots", "poles", "phases", "bore", "stack", "gap", "slot_opening", "rotor_radius", "skew", "phase_shift", "gap_flux_density", "let"];
-    private static readonly string[] WindingBody = ["layers", "turns", "pitch", "paths", "series_turns", "conductors_per_slot", "coil", "top:", "bottom:", "slots:", "for", "group", "let"];
-    private static readonly string[] GroupBody = ["turns", "pitch", "coil", "top:", "bottom:", "slots:", "for", "let"];
-    private static readonly string[] LoopBody = ["coil", "for", "let"];
-    private static readonly string[] DriveBody = ["balanced", "neutral", "let"];
-    private static readonly string[] Functions = ["wrap", "abs", "min", "max", "floor", "ceil", "round", "sqrt", "gcd", "lcm"];
+    // What may start a statement, per enclosing block: all from the vocabulary table.
+    private static readonly string[] TopLevel = [.. Vocabulary.Blocks.Where(b => b.TopLevel).Select(b => b.Word), Vocabulary.Let];
+    private static readonly Dictionary<BlockKind, string[]> BlockBodies = Vocabulary.Blocks.ToDictionary(
+        b => b.Kind, b => Vocabulary.PropertiesOf(b.Kind).Select(p => p.Word).Concat(b.OtherStatements).ToArray());
+    private static readonly string Turns = Vocabulary.Word(PropertyName.Turns);
+    private static readonly string[] LoopBody = [Vocabulary.Coil, Vocabulary.For, Vocabulary.Let];
 
-    private static readonly string[] Lengths = ["mm", "cm", "m"];
-    private static readonly string[] Currents = ["A", "kA"];
-    private static readonly string[] Frequencies = ["Hz", "rad/s", "rpm"];
-    private static readonly string[] Angles = ["deg", "rad"];
+    private static readonly string[] Currents = [.. Vocabulary.UnitsFor(Dimension.CurrentDim)];
+    private static readonly string[] Frequencies = [.. Vocabulary.UnitsFor(Dimension.AngularFrequency)];
+    private static readonly string[] Angles = [.. Vocabulary.UnitsFor(Dimension.AngleDim)];
 
     public static JsonNode? Handle(Document document, JsonObject parameters)
     {
@@ -53,74 +51,69 @@ public static class Completion
             string[] keywords = x.Block switch
             {
                 "" => TopLevel,
-                "machine" => MachineBody,
-                "winding" => WindingBody,
-                "group" => GroupBody,
-                "for" => LoopBody,
-                "drive" => DriveBody,
+                Vocabulary.For => LoopBody,
+                var word when Vocabulary.Block(word) is { } block => BlockBodies[block.Kind],
                 _ => [],
             };
             foreach (var k in keywords) items.Add(Keyword(k));
-            if (x.Block == "drive")
+            if (x.Block == Vocabulary.Word(BlockKind.Drive))
                 foreach (var p in phases) items.Add(Item($"{p} =", Lsp.CompletionItemKind.EnumMember, $"the current of phase {p}", insert: $"{p} = "));
             return;
         }
 
         var last = x.Last!.Value;
         bool afterNumber = last.Kind == TokenKind.Number;
+        if (x.Statement.Count >= 2 && x.Statement[1].Kind == TokenKind.Colon && Vocabulary.LayerOf(x.First) is not null)
+        {
+            PatternLine(x, c, offset, items, phases);
+            return;
+        }
+        if ((Vocabulary.Block(x.First) is not null && x.Statement.Count == 1) || x.First == Vocabulary.PhasesWord)
+            return; // a new name is being written
+        if (Vocabulary.Property(x.First) is { Value: ValueKind.Quantity } property)
+        {
+            string[] units = afterNumber ? [.. Vocabulary.UnitsFor(property.Dimension), .. property.AlsoAccepts is { } also ? Vocabulary.UnitsFor(also) : []] : [];
+            Expression(x, c, offset, items, units);
+            return;
+        }
         switch (x.First)
         {
-            case "machine" or "winding" or "group" or "drive" or "phases" when x.Statement.Count == 1 || x.First == "phases":
-                return; // a new name is being written
-            case "let":
-                if (x.Has(TokenKind.Equals)) Expression(x, c, offset, items, afterNumber ? UnitTable.All.Select(u => u.Symbol).ToArray() : []);
+            case Vocabulary.Let:
+                if (x.Has(TokenKind.Equals)) Expression(x, c, offset, items, afterNumber ? Vocabulary.Units.Select(u => u.Symbol).ToArray() : []);
                 return;
-            case "bore" or "stack" or "gap" or "slot_opening" or "rotor_radius":
-                Expression(x, c, offset, items, afterNumber ? Lengths : []);
-                return;
-            case "skew":
-                Expression(x, c, offset, items, afterNumber ? ["slots", .. Angles] : []);
-                return;
-            case "phase_shift":
-                Expression(x, c, offset, items, afterNumber ? Angles : []);
-                return;
-            case "gap_flux_density":
-                Expression(x, c, offset, items, afterNumber ? ["T", "mT"] : []);
-                return;
-            case "pitch":
-                Expression(x, c, offset, items, afterNumber ? ["slots"] : []);
-                return;
-            case "coil":
+            case Vocabulary.Coil:
                 Coil(x, c, offset, items, phases);
                 return;
-            case "top" or "bottom" or "slots" when x.Statement.Count >= 2 && x.Statement[1].Kind == TokenKind.Colon:
-                if (last.Text == "repeat") { Expression(x, c, offset, items, []); return; }
-                foreach (var p in phases)
-                {
-                    items.Add(Item(p, Lsp.CompletionItemKind.EnumMember, $"phase {p}, go side (+)"));
-                    items.Add(Item("-" + p, Lsp.CompletionItemKind.EnumMember, $"phase {p}, return side (−)", filter: p));
-                }
-                items.Add(Item("_", Lsp.CompletionItemKind.Value, "an empty slot position"));
-                items.Add(Keyword("repeat"));
-                return;
-            case "for":
+            case Vocabulary.For:
                 if (x.Statement.Count == 1) return;
-                if (x.Statement.Count == 2) { items.Add(Keyword("in")); return; }
-                if (x.Has(TokenKind.DotDot) && last.Kind != TokenKind.DotDot && last.Text != "step" && !x.Has("step")) items.Add(Keyword("step"));
+                if (x.Statement.Count == 2) { items.Add(Keyword(Vocabulary.In)); return; }
+                if (x.Has(TokenKind.DotDot) && last.Kind != TokenKind.DotDot && last.Text != Vocabulary.Step && !x.Has(Vocabulary.Step)) items.Add(Keyword(Vocabulary.Step));
                 Expression(x, c, offset, items, []);
                 return;
-            case "balanced":
-                if (x.Has("sequence")) { PhaseItems(phases, items); return; }
-                if (!x.Has("sine")) { items.Add(Keyword("sine")); return; }
+            case Vocabulary.Balanced:
+                if (x.Has(Vocabulary.Sequence)) { PhaseItems(phases, items); return; }
+                if (!x.Has(Vocabulary.Sine)) { items.Add(Keyword(Vocabulary.Sine)); return; }
                 Waveform(x, c, offset, items, balanced: true);
                 return;
         }
-        if (x.Statement.Count >= 2 && x.Statement[1].Kind == TokenKind.Equals && x.Block == "drive")
+        if (x.Statement.Count >= 2 && x.Statement[1].Kind == TokenKind.Equals && x.Block == Vocabulary.Word(BlockKind.Drive))
         {
             Waveform(x, c, offset, items, balanced: false);
             return;
         }
         Expression(x, c, offset, items, []);
+    }
+
+    private static void PatternLine(CompletionContext x, Compilation c, int offset, List<JsonObject> items, IReadOnlyList<string> phases)
+    {
+        if (x.Last!.Value.Text == Vocabulary.Repeat) { Expression(x, c, offset, items, []); return; }
+        foreach (var p in phases)
+        {
+            items.Add(Item(p, Lsp.CompletionItemKind.EnumMember, $"phase {p}, go side (+)"));
+            items.Add(Item("-" + p, Lsp.CompletionItemKind.EnumMember, $"phase {p}, return side (−)", filter: p));
+        }
+        items.Add(Item(Vocabulary.EmptySlot, Lsp.CompletionItemKind.Value, "an empty slot position"));
+        items.Add(Keyword(Vocabulary.Repeat));
     }
 
     private static void Coil(CompletionContext x, Compilation c, int offset, List<JsonObject> items, IReadOnlyList<string> phases)
@@ -131,12 +124,12 @@ public static class Completion
             PhaseItems(phases, items);
             return;
         }
-        if (last.Text == "layer") { items.Add(Keyword("top")); items.Add(Keyword("bottom")); return; }
+        if (last.Text == Vocabulary.Layer) { items.Add(Keyword(Vocabulary.Word(LayerName.Top))); items.Add(Keyword(Vocabulary.Word(LayerName.Bottom))); return; }
         int arrow = IndexOf(x, TokenKind.Arrow);
-        if (arrow >= 0 && x.Statement.Count > arrow + 1 && last.Kind is TokenKind.Number or TokenKind.Word or TokenKind.RParen && last.Text is not ("turns" or "layer"))
+        if (arrow >= 0 && x.Statement.Count > arrow + 1 && last.Kind is TokenKind.Number or TokenKind.Word or TokenKind.RParen && last.Text != Turns && last.Text != Vocabulary.Layer)
         {
-            if (!x.Has("turns")) items.Add(Keyword("turns"));
-            if (!x.Has("layer")) items.Add(Keyword("layer"));
+            if (!x.Has(Turns)) items.Add(Keyword(Turns));
+            if (!x.Has(Vocabulary.Layer)) items.Add(Keyword(Vocabulary.Layer));
         }
         if (x.Has(TokenKind.Colon)) Expression(x, c, offset, items, []);
     }
@@ -148,33 +141,33 @@ public static class Completion
         // A new term starts after '=' or after a '+' or '-' that follows a finished term.
         if (!balanced && (last.Kind == TokenKind.Equals || last.Kind is TokenKind.Plus or TokenKind.Minus && EndsTerm(x)))
         {
-            items.Add(Keyword("sine"));
-            items.Add(Keyword("dc"));
+            items.Add(Keyword(Vocabulary.Sine));
+            items.Add(Keyword(Vocabulary.Dc));
             return;
         }
-        string keyword = x.LastKeyword("sine", "dc", "peak", "rms", "at", "phase");
+        string keyword = x.LastKeyword([Vocabulary.Sine, Vocabulary.Dc, .. Vocabulary.MeasureWords, Vocabulary.At, Vocabulary.Phase]);
         bool afterUnit = last.Kind == TokenKind.Unit;
         switch (keyword)
         {
-            case "sine":
+            case Vocabulary.Sine:
                 if (last.Kind == TokenKind.Number) { Units(Currents, items); return; }
-                if (afterUnit) { items.Add(Keyword("peak")); items.Add(Keyword("rms")); return; }
+                if (afterUnit) { foreach (var m in Vocabulary.Measures) items.Add(Keyword(m.Word)); return; }
                 Expression(x, c, offset, items, []);
                 return;
-            case "peak" or "rms":
-                if (last.Text is "peak" or "rms") items.Add(Keyword("at"));
+            case var measure when Vocabulary.Measure(measure) is not null:
+                if (Vocabulary.Measure(last.Text) is not null) items.Add(Keyword(Vocabulary.At));
                 return;
-            case "at" or "phase":
-                if (last.Kind == TokenKind.Number) { Units(keyword == "at" ? Frequencies : Angles, items); return; }
+            case Vocabulary.At or Vocabulary.Phase:
+                if (last.Kind == TokenKind.Number) { Units(keyword == Vocabulary.At ? Frequencies : Angles, items); return; }
                 if (afterUnit || last.Kind == TokenKind.Word && last.Text != keyword)
                 {
-                    if (keyword == "at") items.Add(Keyword("phase"));
-                    if (balanced) items.Add(Keyword("sequence"));
+                    if (keyword == Vocabulary.At) items.Add(Keyword(Vocabulary.Phase));
+                    if (balanced) items.Add(Keyword(Vocabulary.Sequence));
                     return;
                 }
                 Expression(x, c, offset, items, []);
                 return;
-            case "dc":
+            case Vocabulary.Dc:
                 if (last.Kind == TokenKind.Number) { Units(Currents, items); return; }
                 Expression(x, c, offset, items, []);
                 return;
@@ -183,7 +176,7 @@ public static class Completion
 
     /// <summary>True when the token before the last one ends a waveform term (a value, not a keyword awaiting one).</summary>
     private static bool EndsTerm(CompletionContext x) =>
-        x.Statement.Count >= 2 && x.Statement[^2].Kind is TokenKind.Unit or TokenKind.Number or TokenKind.Word or TokenKind.RParen && x.Statement[^2].Text is not ("sine" or "dc" or "at" or "phase");
+        x.Statement.Count >= 2 && x.Statement[^2].Kind is TokenKind.Unit or TokenKind.Number or TokenKind.Word or TokenKind.RParen && x.Statement[^2].Text is not (Vocabulary.Sine or Vocabulary.Dc or Vocabulary.At or Vocabulary.Phase);
 
     private static void Expression(CompletionContext x, Compilation c, int offset, List<JsonObject> items, string[] units)
     {
@@ -198,8 +191,8 @@ public static class Completion
             items.Add(Item(symbol.Name, loop ? Lsp.CompletionItemKind.Variable : Lsp.CompletionItemKind.Constant,
                 loop ? "loop variable" : symbol.Value is { } v ? $"= {v}" : "value"));
         }
-        foreach (var f in Functions)
-            items.Add(Item(f, Lsp.CompletionItemKind.Function, f == "wrap" ? "wrap(n): slot number brought into 1..Q" : $"{f}(…)", insert: f + "("));
+        foreach (var f in Vocabulary.Functions)
+            items.Add(Item(f.Name, Lsp.CompletionItemKind.Function, f.Help, insert: f.Name + "("));
     }
 
     /// <summary>Values and loop variables defined above the cursor in a block that encloses it.</summary>
@@ -248,7 +241,7 @@ public static class Completion
     private static JsonObject Keyword(string word)
     {
         string bare = word.TrimEnd(':');
-        return Item(word, Lsp.CompletionItemKind.Keyword, KeywordHelp.For(bare) ?? "keyword", insert: word.EndsWith(':') ? word + " " : null, filter: bare);
+        return Item(word, Lsp.CompletionItemKind.Keyword, Vocabulary.Help(bare) ?? "keyword", insert: word.EndsWith(':') ? word + " " : null, filter: bare);
     }
 
     private static JsonObject Item(string label, int kind, string detail, string? insert = null, string? filter = null)

@@ -36,7 +36,7 @@ public static class DocumentSymbols
                 case BlockSyntax block:
                     var name = block.Name.IsMissing ? "(unnamed)" : block.Name.Text;
                     var selection = block.Name.IsMissing ? block.Keyword.Span : block.Name.Span;
-                    items.Add(new Item(name, Detail(block, c), Kind(block.Keyword.Text), block.Span, selection, Collect(block.Body, c)));
+                    items.Add(new Item(name, Detail(block, c), Kind(block.Kind), block.Span, selection, Collect(block.Body, c)));
                     break;
                 case LetSyntax let:
                     var value = c.Semantics.Symbols.FirstOrDefault(s => s.Definition == let.Name.Span)?.Value;
@@ -54,21 +54,21 @@ public static class DocumentSymbols
     private static string Detail(BlockSyntax block, Compilation c)
     {
         var design = c.Design;
-        return block.Keyword.Text switch
+        return block.Kind switch
         {
-            "machine" when design is not null => $"machine · {design.Slots} slots, {design.Poles} poles, {design.Phases.Length} phases",
-            "winding" when design is not null => $"winding · {design.Winding.Layers} layer{(design.Winding.Layers == 1 ? "" : "s")}, {design.Winding.Coils.Length} coils",
-            "group" when design is not null => $"group · {design.Winding.Coils.Count(k => k.Group == block.Name.Text)} coils",
+            BlockKind.Machine when design is not null => $"machine · {design.Slots} slots, {design.Poles} poles, {design.Phases.Length} phases",
+            BlockKind.Winding when design is not null => $"winding · {design.Winding.Layers} layer{(design.Winding.Layers == 1 ? "" : "s")}, {design.Winding.Coils.Length} coils",
+            BlockKind.Group when design is not null => $"group · {design.Winding.Coils.Count(k => k.Group == block.Name.Text)} coils",
             _ => block.Keyword.Text,
         };
     }
 
-    private static int Kind(string keyword) => keyword switch
+    private static int Kind(BlockKind kind) => kind switch
     {
-        "machine" => Lsp.SymbolKind.Class,
-        "winding" => Lsp.SymbolKind.Module,
-        "group" => Lsp.SymbolKind.Struct,
-        "drive" => Lsp.SymbolKind.Event,
+        BlockKind.Machine => Lsp.SymbolKind.Class,
+        BlockKind.Winding => Lsp.SymbolKind.Module,
+        BlockKind.Group => Lsp.SymbolKind.Struct,
+        BlockKind.Drive => Lsp.SymbolKind.Event,
         _ => Lsp.SymbolKind.Namespace,
     };
 

@@ -173,37 +173,37 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         var keyword = property.Keyword.Text;
         var title = OneLine(c.Source.Slice(property.Span));
         var lines = new List<string>();
-        if (KeywordHelp.For(keyword) is { } help) lines.Add(help);
+        if (Vocabulary.Help(keyword) is { } help) lines.Add(help);
         var value = ExpressionProbe.Evaluate(c.Semantics, property.Value, c.Design?.Slots ?? 0);
         if (value is { } q && !(property.Value is NumberSyntax { Unit: null })) lines.Add($"= {q}");
-        if (c.Design is { } d) lines.AddRange(PropertyFacts(d, keyword));
+        if (c.Design is { } d) lines.AddRange(PropertyFacts(d, property.Property.Name));
         return new HoverContent(property.Span, title, lines);
     }
 
-    private static IEnumerable<string> PropertyFacts(WindingDesign d, string keyword)
+    private static IEnumerable<string> PropertyFacts(WindingDesign d, PropertyName property)
     {
         int p = d.PolePairs;
-        switch (keyword)
+        switch (property)
         {
-            case "slots":
+            case PropertyName.Slots:
                 yield return $"slot pitch {Numbers.Show(360.0 * p / d.Slots, 3)}° electrical ({Numbers.Show(360.0 / d.Slots, 3)}° mechanical)";
                 yield return $"slots per pole and phase q = {Numbers.Fraction(d.Slots, d.Poles * d.Phases.Length)}";
                 break;
-            case "poles":
+            case PropertyName.Poles:
                 yield return $"{p} pole pair{(p == 1 ? "" : "s")}; pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots";
                 break;
-            case "pitch" when d.Winding.DeclaredPitch is { } y:
+            case PropertyName.Pitch when d.Winding.DeclaredPitch is { } y:
                 yield return $"{Numbers.Fraction(y * d.Poles, d.Slots)} of the pole pitch ({Numbers.Fraction(d.Slots, d.Poles)} slots)" +
                              (y * d.Poles < d.Slots ? ": short-pitched" : y * d.Poles == d.Slots ? ": full pitch" : ": long-pitched");
                 break;
-            case "paths" or "turns" or "series_turns" or "layers":
+            case PropertyName.Paths or PropertyName.Turns or PropertyName.SeriesTurns or PropertyName.Layers:
                 foreach (var line in SeriesTurns(d)) yield return line;
                 break;
-            case "bore" when d.Geometry.SlotPitch(d.Slots) is { } tau:
+            case PropertyName.Bore when d.Geometry.SlotPitch(d.Slots) is { } tau:
                 yield return $"slot pitch at the bore {Numbers.Show(tau * 1000, 3)} mm";
                 yield return $"pole pitch at the bore {Numbers.Show(Math.PI * d.Geometry.BoreDiameter!.Value / d.Poles * 1000, 2)} mm";
                 break;
-            case "slot_opening" when d.Geometry.SlotOpening is { } b0 && d.Geometry.SlotPitch(d.Slots) is { } pitch:
+            case PropertyName.SlotOpening when d.Geometry.SlotOpening is { } b0 && d.Geometry.SlotPitch(d.Slots) is { } pitch:
                 yield return $"{Numbers.Show(100 * b0 / pitch, 1)} % of the slot pitch";
                 break;
         }
@@ -220,13 +220,13 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
     private static HoverContent? ForBlock(Compilation c, Func<AnalysisResult?> analysis, BlockSyntax block)
     {
         var name = block.Name.Text;
-        if (c.Design is not { } d) return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", [KeywordHelp.For(block.Keyword.Text) ?? ""]);
-        var lines = block.Keyword.Text switch
+        if (c.Design is not { } d) return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", [Vocabulary.Help(block.Keyword.Text) ?? ""]);
+        var lines = block.Kind switch
         {
-            "machine" => MachineFacts(d, analysis()),
-            "winding" => WindingFacts(d, analysis()),
-            "group" => GroupFacts(d, name),
-            "drive" when d.Drives.FirstOrDefault(x => x.Span == block.Span) is { } drive => DriveFacts(d, drive),
+            BlockKind.Machine => MachineFacts(d, analysis()),
+            BlockKind.Winding => WindingFacts(d, analysis()),
+            BlockKind.Group => GroupFacts(d, name),
+            BlockKind.Drive when d.Drives.FirstOrDefault(x => x.Span == block.Span) is { } drive => DriveFacts(d, drive),
             _ => [],
         };
         return new HoverContent(block.Keyword.Span, $"{block.Keyword.Text} {name}", lines);
@@ -281,7 +281,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
     private static HoverContent? ForDriveStatement(Compilation c, IReadOnlyList<SyntaxNode> path, int index)
     {
         if (c.Design is not { } d) return null;
-        var block = path.Take(index).OfType<BlockSyntax>().LastOrDefault(b => b.Keyword.Text == "drive");
+        var block = path.Take(index).OfType<BlockSyntax>().LastOrDefault(b => b.Kind == BlockKind.Drive);
         var drive = block is null ? null : d.Drives.FirstOrDefault(x => x.Span == block.Span);
         if (drive is null) return null;
         var node = path[index];
@@ -325,7 +325,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         {
             if (token.Span.Start > offset) break;
             if (token.Kind != TokenKind.Word || !(token.Span.Contains(offset) || token.Span.End == offset)) continue;
-            if (KeywordHelp.For(token.Text) is { } help) return new HoverContent(token.Span, token.Text, [help]);
+            if (Vocabulary.Help(token.Text) is { } help) return new HoverContent(token.Span, token.Text, [help]);
         }
         return null;
     }

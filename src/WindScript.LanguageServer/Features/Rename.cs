@@ -25,7 +25,7 @@ public static class Rename
         var newName = Json.String(parameters, "newName");
         if (newName.Length == 0 || !Lexer.IsWordStart(newName[0]) || !newName.All(Lexer.IsWordPart))
             throw new RpcException(RpcErrorCodes.RequestFailed, $"'{newName}' is not a name: use letters, digits and '_', starting with a letter or '_'");
-        if (Keywords.IsReserved(newName))
+        if (Vocabulary.IsReserved(newName))
             throw new RpcException(RpcErrorCodes.RequestFailed, $"'{newName}' is a reserved word of the language");
         if (newName != symbol.Name && c.Semantics.Symbols.Any(s => s.Name == newName && SameNamespace(s.Kind, symbol.Kind)))
             throw new RpcException(RpcErrorCodes.RequestFailed, $"'{newName}' is already the name of something else in this file");

@@ -52,7 +52,7 @@ public static class SemanticTokens
                 case TokenKind.Number: items.Add((token.Span, Number, 0)); break;
                 case TokenKind.Unit: items.Add((token.Span, Unit, 0)); break;
                 case TokenKind.Word when names.TryGetValue(token.Span.Start, out var n): items.Add((token.Span, n.Type, n.Modifiers)); break;
-                case TokenKind.Word when Keywords.IsReserved(token.Text): items.Add((token.Span, Keyword, 0)); break;
+                case TokenKind.Word when Vocabulary.IsReserved(token.Text): items.Add((token.Span, Keyword, 0)); break;
             }
         }
         foreach (var comment in c.Syntax.Comments) items.Add((comment.Span, Comment, 0));

@@ -3,8 +3,9 @@ namespace WindScript.Reporting.Drawing;
 /// <summary>
 /// Our colours. Phases take hues from the Okabe–Ito set (M. Okabe, K. Ito, "Color Universal
 /// Design", 2008), which stays distinguishable under the common colour-vision deficiencies; every
-/// phase cell also carries its name and sign, so colour is never the only cue. Fields use a
-/// diverging blue–white–vermillion scale from the same set.
+/// phase cell also carries its name and sign, so colour is never the only cue. The sign of a field
+/// uses its own diverging purple–white–green scale (the ends of ColorBrewer's PRGn, C. Brewer,
+/// colorbrewer2.org), not phase hues, and every picture that uses it draws its key.
 /// </summary>
 public static class Palette
 {
@@ -15,13 +16,16 @@ public static class Palette
     public const string Iron = "#d9d4cc";
     public const string IronEdge = "#8c857b";
 
-    /// <summary>Positive and negative ends of the diverging scale.</summary>
-    public const string Positive = "#d55e00";
-    public const string Negative = "#0072b2";
+    /// <summary>Positive and negative ends of the diverging field scale (not phase colours).</summary>
+    public const string Positive = "#1b7837";
+    public const string Negative = "#762a83";
 
     /// <summary>Curves: the staircase MMF and its fundamental; forward and backward waves.</summary>
     public const string Staircase = "#1b1b1b";
     public const string Fundamental = "#d55e00";
+
+    /// <summary>The exact 2-D field curve beside the thin-gap staircase.</summary>
+    public const string Exact = "#56b4e9";
     public const string Forward = "#0072b2";
     public const string Backward = "#e69f00";
     public const string Factor = "#009e73";
@@ -39,7 +43,7 @@ public static class Palette
         return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
     }
 
-    /// <summary>The diverging scale at v in [-1, 1]: blue through white to vermillion.</summary>
+    /// <summary>The diverging field scale at v in [-1, 1]: purple through white to green.</summary>
     public static string Diverging(double v)
     {
         v = Math.Clamp(v, -1, 1);

@@ -15,7 +15,9 @@ namespace WindScript.Reporting.Plots;
 /// outer surface carries no flux. Each space harmonic ν of the gap flux function ψ_ν then
 /// continues as (r/r_r)^ν into the rotor and as (x^−ν·X^2ν − x^ν)/(X^2ν − 1), x = r/r_s,
 /// X = r_o/r_s, into the yoke (solutions of Laplace's equation that match ψ at the gap and vanish
-/// at the outer surface). The radial B is the thin-gap value μ0·F/(k_C·δ) (Carter's coefficient).
+/// at the outer surface). The chart shows the thin-gap value μ0·F/(k_C·δ) (Carter's coefficient)
+/// and, when both radii are known, the exact 2-D field of the smooth annulus at the rotor surface
+/// (<see cref="StaircaseGapField"/>); the gap ring is coloured by the 2-D field at mid-gap.
 /// </remarks>
 public static class FieldPlot
 {
@@ -29,10 +31,19 @@ public static class FieldPlot
         double? effectiveGap = gap.EffectiveGap;
         // Radial B (T) per ampere-turn of MMF in the thin-gap model, or MMF itself without a gap.
         double scale = effectiveGap is > 0 ? AirGapField.Mu0 / effectiveGap.Value : 1;
-        string quantity = effectiveGap is > 0 ? "radial flux density B (T)" : "MMF (A-turns): no bore and gap given";
+        string quantity = effectiveGap is > 0 ? "radial flux density B (T)" : "MMF (A): no bore and gap given";
         var field = levels.Select(v => v * scale).ToArray();
         var c = x.Harmonic(time, d.PolePairs) * scale;
+
+        var currents = x.CurrentsAt(time);
+        var slotCurrent = MachineAnalysis.SlotAmpereConductors(x.Spectrum, currents);
+        // The exact 2-D field of the smooth annulus, at the rotor surface and mid-gap.
+        StaircaseGapField? exact = gap.BoreRadius is { } rs && gap.RotorRadius is { } rr && rs > 0 && rr > 0 && rs != rr && effectiveGap is > 0
+            ? new StaircaseGapField(slotCurrent, rs, rr) : null;
+        var atRotor = exact is null ? null : Staircases.Sample(theta => exact.RadialAt(exact.RotorRadius, theta));
+        double rMid = exact is null ? 0 : (exact.RotorRadius + exact.StatorRadius) / 2;
         double peak = Math.Max(1e-12, Math.Max(c.Magnitude, field.Select(Math.Abs).DefaultIfEmpty(0).Max()));
+        if (atRotor is not null) peak = Math.Max(peak, atRotor.Max(p => Math.Abs(p.Y)));
 
         var s = new Scene(920, 500, $"Air-gap field of {d.Name}");
         s.Text(20, 24, $"Air-gap field: {x.Name}, {x.DescribeTime(time)}", 14, bold: true);
@@ -41,23 +52,23 @@ public static class FieldPlot
         double cx = 235, cy = 270, unit = 200;
         Point At(double r, double theta) => new(cx + unit * r * Math.Cos(theta), cy - unit * r * Math.Sin(theta));
 
-        // Stator iron, the gap ring coloured by B, the rotor.
+        // Stator iron, the gap ring coloured by B (2-D at mid-gap when the radii are known), the rotor.
         s.Add(new CircleShape(new Point(cx, cy), unit * OuterRadius, new Stroke(Palette.IronEdge, 1), Palette.Iron));
-        for (int i = 0; i < q; i++)
+        int segments = exact is null ? q : Math.Max(8 * q, 240);
+        for (int i = 0; i < segments; i++)
         {
-            double from = SlotSpectrum.SlotAngle(i, q), to = SlotSpectrum.SlotAngle(i + 1, q);
+            double from = exact is null ? SlotSpectrum.SlotAngle(i, q) : 2 * Math.PI * i / segments;
+            double to = exact is null ? SlotSpectrum.SlotAngle(i + 1, q) : 2 * Math.PI * (i + 1) / segments;
+            double value = exact is null ? field[i] : exact.RadialAt(rMid, (from + to) / 2);
             var wedge = new List<Point>();
             for (int k = 0; k <= 6; k++) wedge.Add(At(BoreRadius, from + (to - from) * k / 6));
             for (int k = 6; k >= 0; k--) wedge.Add(At(RotorRadius, from + (to - from) * k / 6));
-            s.Add(new PathShape(wedge, true, null, Palette.Diverging(field[i] / peak)));
+            s.Add(new PathShape(wedge, true, null, Palette.Diverging(value / peak)));
         }
         s.Add(new CircleShape(new Point(cx, cy), unit * RotorRadius, new Stroke(Palette.IronEdge, 1), Palette.Iron));
 
-        // Slots: an opening at the bore, with the slot's current (A) as a coloured disc.
-        var currents = x.CurrentsAt(time);
-        var slotCurrent = new double[q];
-        for (int k = 0; k < x.Spectrum.Phases; k++)
-            for (int i = 0; i < q; i++) slotCurrent[i] += x.Spectrum.SlotConductors[k][i] / x.Spectrum.Paths * currents[k];
+        // Slots: an opening at the bore, with the slot's current as a symbol: a dot (positive
+        // ampere-conductors, towards the viewer) or a cross (negative), sized by magnitude.
         double largestCurrent = Math.Max(1e-12, slotCurrent.Select(Math.Abs).Max());
         double halfWidth = Math.PI / q * 0.55;
         for (int i = 0; i < q; i++)
@@ -66,7 +77,9 @@ public static class FieldPlot
             s.Add(new PathShape([At(BoreRadius, theta - halfWidth * 0.6), At(BoreRadius + SlotDepth, theta - halfWidth),
                 At(BoreRadius + SlotDepth, theta + halfWidth), At(BoreRadius, theta + halfWidth * 0.6)], true, new Stroke(Palette.IronEdge, 0.8), Palette.Paper));
             double discRadius = Math.Min(unit * SlotDepth * 0.35, unit * (BoreRadius + SlotDepth / 2) * halfWidth * 0.8);
-            s.Add(new CircleShape(At(BoreRadius + SlotDepth / 2, theta), discRadius, new Stroke(Palette.IronEdge, 0.5), Palette.Diverging(slotCurrent[i] / largestCurrent)));
+            double share = Math.Abs(slotCurrent[i]) / largestCurrent;
+            if (share < 1e-9) continue;
+            CurrentSymbol(s, At(BoreRadius + SlotDepth / 2, theta), discRadius * (0.45 + 0.55 * share), slotCurrent[i] > 0);
         }
         int every = Math.Max(1, q / 12);
         for (int i = 0; i < q; i += every)
@@ -88,15 +101,39 @@ public static class FieldPlot
         s.Polyline(Staircases.Points(area, field), new Stroke(Palette.Staircase, 1.6));
         s.Polyline([.. Staircases.Sample(theta => (c * Complex.FromPolarCoordinates(1, d.PolePairs * theta)).Real).Select(p => area.At(p.X, p.Y))],
             new Stroke(Palette.Fundamental, 2, [7, 4]));
-        area.DrawLegend(s, [("staircase", Palette.Staircase, false, null), ("fundamental", Palette.Fundamental, false, [7, 4])]);
+        var legend = new List<(string, string, bool, double[]?)> { ("thin gap (Carter)", Palette.Staircase, false, null), ("fundamental", Palette.Fundamental, false, [7, 4]) };
+        if (atRotor is not null)
+        {
+            s.Polyline([.. atRotor.Select(p => area.At(p.X, p.Y))], new Stroke(Palette.Exact, 1.4, [2, 2]));
+            legend.Add(("2-D at rotor", Palette.Exact, false, [2, 2]));
+        }
+        area.DrawLegend(s, legend);
 
-        // Colour key.
+        // Keys: the field scale, and the slot-current symbols.
         double kx = 560, ky = 466;
         for (int k = 0; k < 40; k++) s.Rect(kx + k * 6, ky, 6.5, 12, Palette.Diverging(-1 + 2 * k / 39.0));
         s.Text(kx, ky + 24, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 240, ky + 24, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
-        s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? "gap: radial B (T); slots: current (relative)" : "gap: MMF; slots: current (relative)", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? (exact is null ? "gap colour: radial B (T), thin gap" : "gap colour: radial B (T), 2-D at mid-gap") : "gap colour: MMF (A)", 10, Palette.Muted, Anchor.Middle);
+        CurrentSymbol(s, new Point(26, 60), 6, true);
+        s.Text(36, 64, "+", 10, Palette.Muted);
+        CurrentSymbol(s, new Point(56, 60), 6, false);
+        s.Text(66, 64, "− slot ampere-conductors (symbol size: magnitude)", 10, Palette.Muted);
         return s;
+    }
+
+    /// <summary>A conductor seen end-on: a dot for current towards the viewer, a cross for away.</summary>
+    private static void CurrentSymbol(Scene s, Point centre, double radius, bool towardsViewer)
+    {
+        s.Add(new CircleShape(centre, radius, new Stroke(Palette.Ink, 0.9), Palette.Paper));
+        if (towardsViewer)
+            s.Add(new CircleShape(centre, Math.Max(1, radius * 0.3), null, Palette.Ink));
+        else
+        {
+            double a = radius * 0.7;
+            s.Polyline([new Point(centre.X - a, centre.Y - a), new Point(centre.X + a, centre.Y + a)], new Stroke(Palette.Ink, 0.9));
+            s.Polyline([new Point(centre.X - a, centre.Y + a), new Point(centre.X + a, centre.Y - a)], new Stroke(Palette.Ink, 0.9));
+        }
     }
 
     /// <summary>Contours of the flux function over the cross-section, as (radius, angle) in drawing units.</summary>

@@ -20,10 +20,12 @@ public static class MachineAnalysis
         "conductors concentrated at slot centres; slot openings act only through Carter's coefficient",
         "smooth rotor and uniform gap; no rotor currents or magnets",
         "MMF has zero mean (all gap flux returns through the rotor)",
-        "radial gap field: thin gap B = mu0 F/(kC delta); thick gap B = mu0 F/(r ln(rs/rr))",
+        "gap field: thin gap B = mu0 F/(kC delta) with Carter's coefficient; exact 2-D field of the smooth annulus per harmonic, B_r = mu0 F (v/r) cosh(v ln(r/rr))/sinh(v |ln(rs/rr)|), summed over all orders for the staircase (at the bore read at the tooth centres); the flux-tube approximation mu0 F/(r |ln(rs/rr)|) shown beside it",
+        "no rotor reaction: the gap field is the stator MMF alone, so a loaded drive's field can exceed what iron carries",
         "winding factors and back-EMF include skew; MMF amplitudes are per cross-section (no skew)",
         "differential leakage for balanced currents at the phase shift, exact over all orders, without skew",
-        "inductances: air-gap part only (no slot, end-winding or skew leakage)",
+        "inductances: air-gap part only (no slot, end-winding or skew leakage), winding functions with the flux-tube permeance mu0 rm l/(kC delta); for a thick gap (2-D working-wave permeance more than 1 % from it) the orders v <= Q/2 use the 2-D permeance mu0 l v coth(v |ln(rs/rr)|)/kC; the synchronous (air-gap) inductance includes the differential leakage",
+        "flux per pole and back-EMF at the stator's gap surface (bore radius); inductances at the mean gap radius rm",
     ];
 
     /// <summary>Electrical order n = ν/p (0 for a design without poles, which the checker reports).</summary>
@@ -119,7 +121,7 @@ public static class MachineAnalysis
     {
         var g = design.Geometry;
         double? gap = g.EffectiveMechanicalGap, bore = g.BoreRadius, rotor = g.RotorOuterRadius;
-        if (g.RotorRadius is null && rotor is not null) notes.Add("rotor radius taken as bore radius minus gap");
+        if (g.RotorRadius is null && rotor is not null) notes.Add(g.RotorOutside ? "rotor radius taken as bore radius plus gap (rotor outside)" : "rotor radius taken as bore radius minus gap");
         double? carter = null;
         if (gap is > 0 && g.SlotPitch(design.Slots) is { } pitch)
         {
@@ -150,6 +152,15 @@ public static class MachineAnalysis
         return new BackEmfSummary(b, flux, emf);
     }
 
+    /// <summary>Σ_k conductors_k(s)/paths · i_k: the ampere-conductors in each slot at the instant.</summary>
+    internal static double[] SlotAmpereConductors(WindingSpectrum winding, ReadOnlySpan<double> currents)
+    {
+        var total = new double[winding.Slots];
+        for (int k = 0; k < winding.Phases && k < currents.Length; k++)
+            for (int s = 0; s < total.Length; s++) total[s] += winding.SlotConductors[k][s] / winding.Paths * currents[k];
+        return total;
+    }
+
     private static DriveAnalysis DriveOf(WindingDesign design, WindingSpectrum winding, Drive drive, double time, int maxOrder,
         GapSummary gap, BackEmfSummary? backEmf)
     {
@@ -178,11 +189,12 @@ public static class MachineAnalysis
         var shown = instant.Where(h => h.Amplitude > Negligible * instantLargest && instantLargest > 0).ToImmutableArray();
 
         GapField? peakField = null, fundamentalField = null;
-        if (gap.BoreRadius is { } rs && gap.RotorRadius is { } rr && rs > rr && rr > 0)
+        if (gap.BoreRadius is { } rs && gap.RotorRadius is { } rr && rs > 0 && rr > 0 && rs != rr)
         {
             double carter = gap.CarterCoefficient ?? 1;
-            peakField = AirGapField.Describe(mmf.Peak, rr, rs, carter);
-            fundamentalField = AirGapField.Describe(fundamental, rr, rs, carter);
+            var exact = new StaircaseGapField(SlotAmpereConductors(winding, currents), rs, rr);
+            peakField = AirGapField.Describe(mmf.Peak, rr, rs, carter, exact.PeakAtRotor(), exact.PeakAtStatorTeeth());
+            if (design.PolePairs > 0) fundamentalField = AirGapField.OfHarmonic(fundamental, design.PolePairs, rr, rs, carter);
         }
 
         // Back-EMF at the drive's strongest AC frequency.

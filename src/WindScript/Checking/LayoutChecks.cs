@@ -28,7 +28,7 @@ internal static class LayoutChecks
                 return;
             }
             if (!reported.Add(coil)) return;
-            string where = layers == 1 ? $"slot {slot}" : $"the {(layer == 0 ? "top" : "bottom")} layer of slot {slot}";
+            string where = layers == 1 ? $"slot {slot}" : $"the {Syntax.Vocabulary.Word(layer == 0 ? Syntax.LayerName.Top : Syntax.LayerName.Bottom)} layer of slot {slot}";
             c.Diagnostics.Add(DiagnosticCatalog.LayerOverfilled.At(coil.Span,
                     $"{where} already holds a coil side of phase {c.PhaseName(earlier.Phase)}; a {layers}-layer slot holds {layers} side{(layers == 1 ? "" : "s")}")
                 with { Related = earlier.Span != default ? [new RelatedSpan(earlier.Span, "the coil already there")] : [] });

@@ -43,9 +43,9 @@ internal static class SourceEdits
     }
 
     /// <summary>The span of the property statement 'keyword value' in the block at <paramref name="blockSpan"/>, if written.</summary>
-    public static TextSpan? PropertySpan(SyntaxTree? tree, TextSpan blockSpan, string keyword) =>
+    public static TextSpan? PropertySpan(SyntaxTree? tree, TextSpan blockSpan, PropertyName property) =>
         tree?.Root.Statements.OfType<BlockSyntax>().FirstOrDefault(b => b.Span == blockSpan)?.Body
-            .OfType<PropertySyntax>().FirstOrDefault(p => p.Keyword.Text == keyword)?.Span;
+            .OfType<PropertySyntax>().FirstOrDefault(p => p.Property.Name == property)?.Span;
 
     /// <summary>The 'coil' statement written at <paramref name="span"/>, if any.</summary>
     public static CoilSyntax? FindCoil(SyntaxTree tree, TextSpan span) => Find<CoilSyntax>(tree.Root.Statements, span);

@@ -11,7 +11,7 @@ internal static class SourceNames
         var chars = name.Select(c => Lexer.IsWordPart(c) ? c : '_').ToArray();
         var text = new string(chars);
         if (!Lexer.IsWordStart(text[0])) text = "_" + text;
-        if (text == "_" || Keywords.IsReserved(text)) text += "_";
+        if (text == "_" || Vocabulary.IsReserved(text)) text += "_";
         return text;
     }
 }

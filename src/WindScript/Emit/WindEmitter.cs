@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using WindScript.Syntax;
 using WindScript.Model;
 using WindScript.Semantics;
 using WindScript.Text;
@@ -43,36 +44,36 @@ public static class WindEmitter
 
     private static void WriteMachine(StringBuilder o, WindingDesign d, string[] phases)
     {
-        o.Append("machine ").Append(SourceNames.Safe(d.Name, "machine")).Append(" {\n");
-        Line(o, $"slots {d.Slots}");
-        Line(o, $"poles {d.Poles}");
-        Line(o, "phases " + string.Join(" ", phases));
+        Open(o, BlockKind.Machine, d.Name);
+        Line(o, $"{W(PropertyName.Slots)} {d.Slots}");
+        Line(o, $"{W(PropertyName.Poles)} {d.Poles}");
+        Line(o, $"{Vocabulary.PhasesWord} " + string.Join(" ", phases));
         if (Math.Abs(d.PhaseShiftDegrees - Evaluator.DefaultPhaseShift(d.Phases.Length)) > 1e-12)
-            Line(o, $"phase_shift {Number(d.PhaseShiftDegrees)} deg");
+            Line(o, $"{W(PropertyName.PhaseShift)} {Number(d.PhaseShiftDegrees)} deg");
         var g = d.Geometry;
-        void Millimetres(string keyword, double? metres) { if (metres is { } v) Line(o, $"{keyword} {Number(v * 1000)} mm"); }
-        Millimetres("bore", g.BoreDiameter);
-        Millimetres("stack", g.StackLength);
-        Millimetres("gap", g.Gap);
-        Millimetres("slot_opening", g.SlotOpening);
-        Millimetres("rotor_radius", g.RotorRadius);
-        if (g.SkewSlots != 0) Line(o, $"skew {Number(g.SkewSlots)} slots");
-        if (g.GapFluxDensity is { } b) Line(o, $"gap_flux_density {Number(b)} T");
+        void Millimetres(PropertyName property, double? metres) { if (metres is { } v) Line(o, $"{W(property)} {Number(v * 1000)} mm"); }
+        Millimetres(PropertyName.Bore, g.BoreDiameter);
+        Millimetres(PropertyName.Stack, g.StackLength);
+        Millimetres(PropertyName.Gap, g.Gap);
+        Millimetres(PropertyName.SlotOpening, g.SlotOpening);
+        Millimetres(PropertyName.RotorRadius, g.RotorRadius);
+        if (g.SkewSlots != 0) Line(o, $"{W(PropertyName.Skew)} {Number(g.SkewSlots)} slots");
+        if (g.GapFluxDensity is { } b) Line(o, $"{W(PropertyName.GapFluxDensity)} {Number(b)} T");
         o.Append("}\n");
     }
 
     private static void WriteWinding(StringBuilder o, WindingDesign d, string[] phases, EmitOptions options)
     {
         var w = d.Winding;
-        o.Append("winding ").Append(SourceNames.Safe(w.Name, "winding")).Append(" {\n");
-        Line(o, $"layers {w.Layers}");
+        Open(o, BlockKind.Winding, w.Name);
+        Line(o, $"{W(PropertyName.Layers)} {w.Layers}");
         var pattern = options.PreferPatterns ? PatternForm.TryCreate(d) : null;
         int turns = pattern?.Turns ?? CommonTurns(w);
-        if (w.Coils.Length > 0) Line(o, $"turns {turns}", "per coil");
-        if ((pattern?.Pitch ?? w.DeclaredPitch) is { } pitch) Line(o, $"pitch {pitch} slots", PitchComment(d));
-        Line(o, $"paths {w.Paths}");
-        if (w.DeclaredSeriesTurns is { } n) Line(o, $"series_turns {n}");
-        if (w.DeclaredConductorsPerSlot is { } z) Line(o, $"conductors_per_slot {z}");
+        if (w.Coils.Length > 0) Line(o, $"{W(PropertyName.Turns)} {turns}", "per coil");
+        if ((pattern?.Pitch ?? w.DeclaredPitch) is { } pitch) Line(o, $"{W(PropertyName.Pitch)} {pitch} slots", PitchComment(d));
+        Line(o, $"{W(PropertyName.Paths)} {w.Paths}");
+        if (w.DeclaredSeriesTurns is { } n) Line(o, $"{W(PropertyName.SeriesTurns)} {n}");
+        if (w.DeclaredConductorsPerSlot is { } z) Line(o, $"{W(PropertyName.ConductorsPerSlot)} {z}");
         if (pattern is not null) WritePattern(o, d, pattern, phases, options.EntriesPerLine);
         else WriteCoils(o, d, phases, turns);
         o.Append("}\n");
@@ -83,7 +84,7 @@ public static class WindEmitter
     private static void WritePattern(StringBuilder o, WindingDesign d, PatternForm pattern, string[] phases, int perLine)
     {
         bool single = d.Winding.Layers == 1;
-        string keyword = single ? "slots:" : "top:";
+        string keyword = Vocabulary.Word(single ? LayerName.Slots : LayerName.Top) + ":";
         o.Append(Indent(1)).Append(single
             ? "# each + side returns one pitch on as the - side\n"
             : "# go sides in the top layer; each returns one pitch on in the bottom layer\n");
@@ -92,7 +93,7 @@ public static class WindEmitter
         if (period <= perLine)
         {
             var entries = string.Join(" ", pattern.Entries.Take(period).Select(e => Entry(e, phases)));
-            Line(o, q / period > 1 ? $"{keyword} {entries} repeat {q / period}" : $"{keyword} {entries}");
+            Line(o, q / period > 1 ? $"{keyword} {entries} {Vocabulary.Repeat} {q / period}" : $"{keyword} {entries}");
             return;
         }
         int lines = (q + perLine - 1) / perLine, size = (q + lines - 1) / lines;
@@ -105,7 +106,7 @@ public static class WindEmitter
     }
 
     private static string Entry((int Phase, int Sign) e, string[] phases) =>
-        e.Phase < 0 ? "_" : (e.Sign < 0 ? "-" : "") + phases[e.Phase];
+        e.Phase < 0 ? Vocabulary.EmptySlot : (e.Sign < 0 ? "-" : "") + phases[e.Phase];
 
     private static void WriteCoils(StringBuilder o, WindingDesign d, string[] phases, int turns)
     {
@@ -115,15 +116,16 @@ public static class WindEmitter
             int depth = 1;
             if (group.Key != "")
             {
-                o.Append(Indent(1)).Append("group ").Append(SourceNames.Safe(group.Key, "group")).Append(" {\n");
+                o.Append(Indent(1));
+                Open(o, BlockKind.Group, group.Key);
                 depth = 2;
             }
             foreach (var c in group)
             {
-                var text = new StringBuilder("coil ");
+                var text = new StringBuilder(Vocabulary.Coil).Append(' ');
                 if (c.Polarity < 0) text.Append('-');
                 text.Append(phases[c.Phase]).Append(": ").Append(c.GoSlot.ToString(Inv)).Append(" -> ").Append(c.ReturnSlot.ToString(Inv));
-                if (c.Turns != turns) text.Append(" turns ").Append(c.Turns.ToString(Inv));
+                if (c.Turns != turns) text.Append(' ').Append(W(PropertyName.Turns)).Append(' ').Append(c.Turns.ToString(Inv));
                 text.Append(LayerClause(c, w.Layers));
                 o.Append(Indent(depth)).Append(text).Append('\n');
             }
@@ -140,7 +142,7 @@ public static class WindEmitter
         else
         {
             if (c.GoLayer == 0 && c.ReturnLayer == 1) return "";
-            if (c.GoLayer == 1 && c.ReturnLayer == 0) return " layer bottom";
+            if (c.GoLayer == 1 && c.ReturnLayer == 0) return $" {Vocabulary.Layer} {Vocabulary.Word(LayerName.Bottom)}";
         }
         throw new NotSupportedException(
             $"coil {c.GoSlot} -> {c.ReturnSlot} has its sides in layers {c.GoLayer} and {c.ReturnLayer} of a {layers}-layer winding, which the language cannot write");
@@ -152,8 +154,8 @@ public static class WindEmitter
 
     private static void WriteDrive(StringBuilder o, Drive drive, string[] phases)
     {
-        o.Append("drive ").Append(SourceNames.Safe(drive.Name, "drive")).Append(" {\n");
-        if (drive.Neutral) Line(o, "neutral");
+        Open(o, BlockKind.Drive, drive.Name);
+        if (drive.Neutral) Line(o, Vocabulary.Neutral);
         foreach (var current in drive.Currents)
         {
             if (current.Components.IsDefaultOrEmpty || current.Phase < 0 || current.Phase >= phases.Length) continue;
@@ -163,8 +165,17 @@ public static class WindEmitter
     }
 
     private static string Term(CurrentComponent c) => c.IsDirect
-        ? $"dc {Number(c.Peak)} A"
-        : $"sine {Number(c.Peak)} A peak at {Number(c.Omega / (2 * Math.PI))} Hz phase {Number(c.PhaseAngle * 180 / Math.PI)} deg";
+        ? $"{Vocabulary.Dc} {Number(c.Peak)} A"
+        : $"{Vocabulary.Sine} {Number(c.Peak)} A {Vocabulary.Word(AmplitudeMeasure.Peak)} {Vocabulary.At} {Number(c.Omega / (2 * Math.PI))} Hz {Vocabulary.Phase} {Number(c.PhaseAngle * 180 / Math.PI)} deg";
+
+    private static string W(PropertyName property) => Vocabulary.Word(property);
+
+    // "machine NAME {": the block word, and the name made safe to read back.
+    private static void Open(StringBuilder o, BlockKind kind, string name)
+    {
+        string word = Vocabulary.Word(kind);
+        o.Append(word).Append(' ').Append(SourceNames.Safe(name, word)).Append(" {\n");
+    }
 
     /// <summary>A number as the language reads it: invariant culture, 12 significant digits, no noise digits.</summary>
     public static string Number(double value)

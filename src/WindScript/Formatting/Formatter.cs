@@ -96,7 +96,7 @@ public static class Formatter
             bool closes = _line[0].Kind == TokenKind.RBrace;
             StartLine(_line[0].Span.Start, closes);
             _out.Append(IndentText(_depth));
-            bool pattern = _line.Count >= 2 && _line[0].Kind == TokenKind.Word && Keywords.PatternLayers.Contains(_line[0].Text) && _line[1].Kind == TokenKind.Colon;
+            bool pattern = _line.Count >= 2 && _line[0].Kind == TokenKind.Word && Vocabulary.LayerWords.Contains(_line[0].Text) && _line[1].Kind == TokenKind.Colon;
             for (int i = 0; i < _line.Count; i++)
             {
                 if (i > 0 && SpaceBetween(i, pattern)) _out.Append(' ');
@@ -130,7 +130,7 @@ public static class Formatter
             var cur = _line[i];
             if (cur.Kind is TokenKind.Colon or TokenKind.Comma or TokenKind.RParen) return false;
             if (prev.Kind == TokenKind.LParen) return false;
-            if (cur.Kind == TokenKind.LParen && prev.Kind == TokenKind.Word && !Keywords.IsReserved(prev.Text)) return false; // call
+            if (cur.Kind == TokenKind.LParen && prev.Kind == TokenKind.Word && !Vocabulary.IsReserved(prev.Text)) return false; // call
             if (prev.Kind is TokenKind.Minus or TokenKind.Plus && IsSign(i - 1, patternLine)) return false;
             return true;
         }
@@ -143,7 +143,7 @@ public static class Formatter
             return before.Kind switch
             {
                 TokenKind.Number or TokenKind.Unit or TokenKind.RParen => false,
-                TokenKind.Word => Keywords.IsReserved(before.Text),
+                TokenKind.Word => Vocabulary.IsReserved(before.Text),
                 _ => true,
             };
         }

@@ -6,7 +6,10 @@ namespace WindScript.Model;
 /// </summary>
 public sealed record Geometry
 {
-    /// <summary>Stator bore (inner) diameter.</summary>
+    /// <summary>
+    /// Diameter of the stator's slotted surface at the gap: the bore (inner diameter) of an
+    /// inner-rotor machine, the stator's outer diameter when the rotor is outside.
+    /// </summary>
     public double? BoreDiameter { get; init; }
 
     /// <summary>Axial length of the core.</summary>
@@ -18,8 +21,11 @@ public sealed record Geometry
     /// <summary>Width of the slot opening at the bore, for Carter's coefficient.</summary>
     public double? SlotOpening { get; init; }
 
-    /// <summary>Rotor outer radius, if given; otherwise bore radius minus gap.</summary>
+    /// <summary>Radius of the rotor's gap surface, if given; otherwise bore radius ∓ gap.</summary>
     public double? RotorRadius { get; init; }
+
+    /// <summary>True when the rotor lies outside the stator (hub and fan motors): the gap is outside the slotted surface.</summary>
+    public bool RotorOutside { get; init; }
 
     /// <summary>Skew of the stator slots, in slot pitches (0 = unskewed).</summary>
     public double SkewSlots { get; init; }
@@ -30,11 +36,11 @@ public sealed record Geometry
     /// <summary>Bore radius (m), half the bore diameter; null without a bore.</summary>
     public double? BoreRadius => BoreDiameter / 2;
 
-    /// <summary>The rotor radius actually used: given, or bore radius minus gap.</summary>
-    public double? RotorOuterRadius => RotorRadius ?? (BoreDiameter is { } d && Gap is { } g ? d / 2 - g : null);
+    /// <summary>The radius of the rotor's gap surface actually used: given, or bore radius minus (inner rotor) or plus (outer rotor) the gap.</summary>
+    public double? RotorOuterRadius => RotorRadius ?? (BoreDiameter is { } d && Gap is { } g ? (RotorOutside ? d / 2 + g : d / 2 - g) : null);
 
-    /// <summary>The radial gap actually used: given, or bore radius minus rotor radius.</summary>
-    public double? EffectiveMechanicalGap => Gap ?? (BoreDiameter is { } d && RotorRadius is { } r ? d / 2 - r : null);
+    /// <summary>The radial gap actually used: given, or the distance between the bore and rotor radii.</summary>
+    public double? EffectiveMechanicalGap => Gap ?? (BoreDiameter is { } d && RotorRadius is { } r ? (RotorOutside ? r - d / 2 : d / 2 - r) : null);
 
     /// <summary>Slot pitch at the bore, in metres.</summary>
     public double? SlotPitch(int slots) => BoreDiameter is { } d ? Math.PI * d / slots : null;

@@ -30,7 +30,7 @@ internal static class SlotComparison
     }
 
     /// <summary>"top"/"bottom" for two layers, "slot" for one.</summary>
-    public static string LayerName(int layer, int layers) => layers == 1 ? "slot" : layer == 0 ? "top" : layer == 1 ? "bottom" : $"layer {layer + 1}";
+    public static string LayerName(int layer, int layers) => layers == 1 ? "slot" : layer == 0 ? Syntax.Vocabulary.Word(Syntax.LayerName.Top) : layer == 1 ? Syntax.Vocabulary.Word(Syntax.LayerName.Bottom) : $"layer {layer + 1}";
 
     /// <summary>A cell as "+U 6" (several phases joined by "/"), or "." when empty.</summary>
     public static string Describe(IReadOnlyList<SlotCell> cells, IReadOnlyList<Phase> phases) =>

@@ -36,7 +36,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                 case LetSyntax let:
                     LetBinder.Bind(let, scope, evaluator, diagnostics, model);
                     break;
-                case FlagSyntax { Keyword.Text: "neutral" }:
+                case FlagSyntax { Keyword.Text: Vocabulary.Neutral }:
                     neutral = true;
                     break;
                 case PhaseCurrentSyntax current:
@@ -184,7 +184,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     return null;
                 }
                 if (amplitude is not { } a || omega is not { } o) return null;
-                double peak = sine.Measure.Text == "rms" ? a * Math.Sqrt(2) : a;
+                double peak = sine.MeasureKind == AmplitudeMeasure.Rms ? a * Math.Sqrt(2) : a;
                 return new CurrentComponent(peak, o, phase, sine.Span);
             default:
                 return null;

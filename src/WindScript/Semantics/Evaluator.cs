@@ -33,15 +33,15 @@ internal static class Evaluator
                 case LetSyntax let:
                     LetBinder.Bind(let, top, evaluator, diagnostics, model);
                     break;
-                case BlockSyntax { Keyword.Text: "machine" } b:
+                case BlockSyntax { Kind: BlockKind.Machine } b:
                     if (machineBlock is null) machineBlock = b;
                     else diagnostics.Add(DiagnosticCatalog.MoreThanOne, b.Keyword.Span, "a file describes one machine; this is a second machine block");
                     break;
-                case BlockSyntax { Keyword.Text: "winding" } b:
+                case BlockSyntax { Kind: BlockKind.Winding } b:
                     if (windingBlock is null) windingBlock = b;
                     else diagnostics.Add(DiagnosticCatalog.MoreThanOne, b.Keyword.Span, "a file describes one winding; this is a second winding block");
                     break;
-                case BlockSyntax { Keyword.Text: "drive" } b:
+                case BlockSyntax { Kind: BlockKind.Drive } b:
                     driveBlocks.Add(b);
                     break;
                 default:
@@ -63,9 +63,10 @@ internal static class Evaluator
             {
                 if (!present && !brokenLines.Contains(keyword)) diagnostics.Add(DiagnosticCatalog.MissingDeclaration, machineBlock.Keyword.Span, $"machine '{machine.Name}' does not give {what}");
             }
-            Require(machine.Slots is not null || machine.SlotsSpan != default, "slots", "its slot count ('slots')");
-            Require(machine.Poles is not null || machine.PolesSpan != default, "poles", "its pole count ('poles')");
-            Require(!machine.Phases.IsDefaultOrEmpty || machine.PhasesSpan != default, "phases", "its phases ('phases U V W')");
+            string slotsWord = Vocabulary.Word(PropertyName.Slots), polesWord = Vocabulary.Word(PropertyName.Poles);
+            Require(machine.Slots is not null || machine.SlotsSpan != default, slotsWord, $"its slot count ('{slotsWord}')");
+            Require(machine.Poles is not null || machine.PolesSpan != default, polesWord, $"its pole count ('{polesWord}')");
+            Require(!machine.Phases.IsDefaultOrEmpty || machine.PhasesSpan != default, Vocabulary.PhasesWord, $"its phases ('{Vocabulary.PhasesWord} U V W')");
         }
         evaluator.Slots = machine.Slots ?? 0;
 
@@ -145,7 +146,7 @@ internal static class Evaluator
         {
             if (statement is BlockSyntax { Closed: false } block)
             {
-                bool IsTopLevel(StatementSyntax s) => s is BlockSyntax { Keyword.Text: "machine" or "winding" or "drive" };
+                bool IsTopLevel(StatementSyntax s) => s is BlockSyntax b && Vocabulary.Block(b.Kind).TopLevel;
                 yield return block with { Body = block.Body.Where(s => !IsTopLevel(s)).ToArray() };
                 foreach (var inner in Flatten(block.Body.Where(IsTopLevel).ToArray())) yield return inner;
             }

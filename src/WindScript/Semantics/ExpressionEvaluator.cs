@@ -143,12 +143,7 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             if (Evaluate(call.Arguments[i], scope) is { } q) args[i] = q; else ok = false;
         }
         string f = call.Function.Text;
-        int? arity = f switch
-        {
-            "wrap" or "abs" or "floor" or "ceil" or "round" or "sqrt" or "electrical" or "mechanical" => 1,
-            "min" or "max" or "gcd" or "lcm" => 2,
-            _ => null,
-        };
+        int? arity = Vocabulary.Function(f)?.Arity;
         if (arity is null)
         {
             diagnostics.Add(DiagnosticCatalog.UnknownFunction, call.Function.Span, $"there is no function '{f}'");

@@ -48,7 +48,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                     }
                     facts = facts with { Phases = BindPhases(phases, scope), PhasesSpan = phases.Span };
                     break;
-                case PropertySyntax p when IsMachineProperty(p.Keyword.Text):
+                case PropertySyntax p when p.Property.In(BlockKind.Machine):
                     if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
                     (facts, geometry) = BindProperty(p, scope, facts, geometry);
                     break;
@@ -59,9 +59,6 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         }
         return facts with { Geometry = geometry };
     }
-
-    private static bool IsMachineProperty(string keyword) => keyword is "slots" or "poles" or "bore" or "stack" or "gap"
-        or "slot_opening" or "rotor_radius" or "skew" or "phase_shift" or "gap_flux_density";
 
     private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
     {
@@ -92,11 +89,11 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             return v;
         }
 
-        switch (p.Keyword.Text)
+        switch (p.Property.Name)
         {
-            case "slots":
+            case PropertyName.Slots:
                 return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, 100_000), SlotsSpan = p.Span }, g);
-            case "poles":
+            case PropertyName.Poles:
                 var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, 100_000);
                 if (poles is { } n && n % 2 != 0)
                 {
@@ -105,17 +102,17 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                 }
                 if (poles is { } pairsOf) evaluator.PolePairs = pairsOf / 2;
                 return (facts with { Poles = poles, PolesSpan = p.Span }, g);
-            case "bore": return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
-            case "stack": return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
-            case "gap": return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
-            case "slot_opening": return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
-            case "rotor_radius": return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
-            case "gap_flux_density":
+            case PropertyName.Bore: return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
+            case PropertyName.Stack: return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
+            case PropertyName.Gap: return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
+            case PropertyName.SlotOpening: return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
+            case PropertyName.RotorRadius: return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case PropertyName.GapFluxDensity:
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
-            case "phase_shift":
+            case PropertyName.PhaseShift:
                 // An electrical angle: the spacing of the phase axes in electrical degrees.
                 return (facts with { PhaseShiftDegrees = evaluator.EvaluateAngle(p.Value, scope, AngleKind.Electrical, "the phase shift") * 180 / Math.PI }, g);
-            case "skew":
+            case PropertyName.Skew:
                 // In slot pitches, or as a mechanical angle around the bore (converted through the slot count).
                 if (evaluator.EvaluateInAngleContext(p.Value, scope, AngleKind.Mechanical) is { } q)
                 {

@@ -36,22 +36,22 @@ internal sealed class WindingBinder(
                 case LetSyntax let:
                     LetBinder.Bind(let, scope, evaluator, diagnostics, model);
                     break;
-                case PropertySyntax p when p.Keyword.Text is "layers" or "turns" or "pitch" or "paths" or "series_turns" or "conductors_per_slot":
+                case PropertySyntax p when p.Property.In(BlockKind.Winding):
                     if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
-                    switch (p.Keyword.Text)
+                    switch (p.Property.Name)
                     {
-                        case "layers": layers = evaluator.EvaluateInteger(p.Value, scope, "the number of layers", 1, 2); layersSpan = p.Span; break;
-                        case "turns": turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1); break;
-                        case "pitch": pitch = BindPitch(p, scope); pitchSpan = p.Span; break;
-                        case "paths": paths = evaluator.EvaluateInteger(p.Value, scope, "the number of parallel paths", 1); pathsSpan = p.Span; break;
-                        case "series_turns": seriesTurns = evaluator.EvaluateInteger(p.Value, scope, "series turns per phase", 1); seriesSpan = p.Span; break;
-                        case "conductors_per_slot": conductors = evaluator.EvaluateInteger(p.Value, scope, "conductors per slot", 1); conductorsSpan = p.Span; break;
+                        case PropertyName.Layers: layers = evaluator.EvaluateInteger(p.Value, scope, "the number of layers", 1, 2); layersSpan = p.Span; break;
+                        case PropertyName.Turns: turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1); break;
+                        case PropertyName.Pitch: pitch = BindPitch(p, scope); pitchSpan = p.Span; break;
+                        case PropertyName.Paths: paths = evaluator.EvaluateInteger(p.Value, scope, "the number of parallel paths", 1); pathsSpan = p.Span; break;
+                        case PropertyName.SeriesTurns: seriesTurns = evaluator.EvaluateInteger(p.Value, scope, "series turns per phase", 1); seriesSpan = p.Span; break;
+                        case PropertyName.ConductorsPerSlot: conductors = evaluator.EvaluateInteger(p.Value, scope, "conductors per slot", 1); conductorsSpan = p.Span; break;
                     }
                     break;
             }
         }
 
-        if (layers is null && !seen.ContainsKey("layers"))
+        if (layers is null && !seen.ContainsKey(Vocabulary.Word(PropertyName.Layers)))
             diagnostics.Add(DiagnosticCatalog.MissingDeclaration, block.Keyword.Span, $"winding '{block.Name.Text}' does not say how many layers it has (add 'layers 1' or 'layers 2')");
         // Without a (valid) 'layers', read the patterns as their form says, so one omission stays one error.
         _layers = layers ?? (block.Body.OfType<PatternSyntax>().Any(p => p.Layer.Text == "slots") ? 1 : 2);
@@ -100,7 +100,8 @@ internal sealed class WindingBinder(
         {
             switch (statement)
             {
-                case LetSyntax or PropertySyntax when isWinding:
+                case LetSyntax when isWinding:
+                case PropertySyntax p when isWinding && p.Property.In(BlockKind.Winding):
                     break; // bound in pass 1
                 case CoilSyntax coil:
                     BindCoil(coil, scope, settings);
@@ -111,7 +112,7 @@ internal sealed class WindingBinder(
                 case ForSyntax loop:
                     BindLoop(loop, scope, settings, allowGroups ? groupNames : null);
                     break;
-                case BlockSyntax { Keyword.Text: "group" } group when allowGroups:
+                case BlockSyntax { Kind: BlockKind.Group } group when allowGroups:
                     BindGroup(group, scope, settings, groupNames);
                     break;
                 default:
@@ -152,13 +153,13 @@ internal sealed class WindingBinder(
                 case LetSyntax let:
                     LetBinder.Bind(let, scope, evaluator, diagnostics, model);
                     break;
-                case PropertySyntax { Keyword.Text: "turns" } p when BlockReader.FirstTime(diagnostics, seen, p):
+                case PropertySyntax { Property.Name: PropertyName.Turns } p when BlockReader.FirstTime(diagnostics, seen, p):
                     settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1) };
                     break;
-                case PropertySyntax { Keyword.Text: "pitch" } p when BlockReader.FirstTime(diagnostics, seen, p):
+                case PropertySyntax { Property.Name: PropertyName.Pitch } p when BlockReader.FirstTime(diagnostics, seen, p):
                     settings = settings with { Pitch = BindPitch(p, scope), PitchSpan = p.Span };
                     break;
-                case PropertySyntax { Keyword.Text: "turns" or "pitch" }:
+                case PropertySyntax { Property.Name: PropertyName.Turns or PropertyName.Pitch }:
                     break; // repeated, reported above
                 default:
                     rest.Add(statement);
@@ -221,7 +222,7 @@ internal sealed class WindingBinder(
             diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, coil.Span,
                 "this coil has no turns: add 'turns N' to it, or a 'turns' statement to its group or winding");
         var (goLayer, returnLayer) = (0, _layers == 2 ? 1 : 0);
-        if (coil.Layer is { Text: "bottom" } layer)
+        if (coil.GoLayer == LayerName.Bottom && coil.Layer is { } layer)
         {
             if (_layers == 1)
                 diagnostics.Add(DiagnosticCatalog.InvalidCount, layer.Span, "a single-layer winding has no bottom layer");
@@ -267,25 +268,25 @@ internal sealed class WindingBinder(
 
     private sealed class PatternCollector
     {
-        public readonly Dictionary<string, List<PatternCell>> Layers = new(StringComparer.Ordinal);
-        public readonly Dictionary<string, PatternSyntax> LastLine = new(StringComparer.Ordinal);
-        public readonly HashSet<string> Broken = [];
+        public readonly Dictionary<LayerName, List<PatternCell>> Layers = [];
+        public readonly Dictionary<LayerName, PatternSyntax> LastLine = [];
+        public readonly HashSet<LayerName> Broken = [];
     }
 
     private void CollectPattern(PatternSyntax pattern, Scope scope, PatternCollector collector)
     {
-        string layer = pattern.Layer.Text;
-        if (_layers == 1 && layer == "bottom")
+        var layer = pattern.LayerKind;
+        if (_layers == 1 && layer == LayerName.Bottom)
         {
             diagnostics.Add(DiagnosticCatalog.MisplacedStatement, pattern.Layer.Span, "a single-layer winding has no bottom layer; list its slots with 'slots:'");
             return;
         }
-        if (_layers == 2 && layer == "slots")
+        if (_layers == 2 && layer == LayerName.Slots)
         {
             diagnostics.Add(DiagnosticCatalog.MisplacedStatement, pattern.Layer.Span, "a double-layer winding lists its layers with 'top:' (and optionally 'bottom:')");
             return;
         }
-        if (_layers == 1) layer = "slots"; // 'top:' in a single-layer winding means its one layer
+        if (_layers == 1) layer = LayerName.Slots; // 'top:' in a single-layer winding means its one layer
         int repeat = 1;
         if (pattern.Repeat is { } r)
         {
@@ -318,7 +319,7 @@ internal sealed class WindingBinder(
             {
                 var line = collector.LastLine[layer];
                 diagnostics.Add(DiagnosticCatalog.PatternLength, line.Layer.Span,
-                    $"the {layer} pattern covers {cells.Count} slot{(cells.Count == 1 ? "" : "s")}, but the machine has {q}");
+                    $"the {Vocabulary.Word(layer)} pattern covers {cells.Count} slot{(cells.Count == 1 ? "" : "s")}, but the machine has {q}");
                 collector.Broken.Add(layer);
             }
         }
@@ -336,13 +337,13 @@ internal sealed class WindingBinder(
         int Wrap(int s) => (s - 1) % q + 1;
 
         var unbalanced = UnbalancedPhases(collector);
-        if (collector.Layers.TryGetValue("slots", out var single))
+        if (collector.Layers.TryGetValue(LayerName.Slots, out var single))
         {
             BuildSingleLayer(single, q, y, turns, settings.Name, Wrap, unbalanced);
             return;
         }
-        collector.Layers.TryGetValue("top", out var top);
-        collector.Layers.TryGetValue("bottom", out var bottom);
+        collector.Layers.TryGetValue(LayerName.Top, out var top);
+        collector.Layers.TryGetValue(LayerName.Bottom, out var bottom);
         if (top is not null)
         {
             for (int s = 1; s <= q; s++)
@@ -377,8 +378,8 @@ internal sealed class WindingBinder(
     private HashSet<int> UnbalancedPhases(PatternCollector collector)
     {
         var result = new HashSet<int>();
-        bool bothLayers = collector.Layers.ContainsKey("top") && collector.Layers.ContainsKey("bottom");
-        if (!collector.Layers.ContainsKey("slots") && !bothLayers) return result; // one derived layer always balances
+        bool bothLayers = collector.Layers.ContainsKey(LayerName.Top) && collector.Layers.ContainsKey(LayerName.Bottom);
+        if (!collector.Layers.ContainsKey(LayerName.Slots) && !bothLayers) return result; // one derived layer always balances
         var sums = new Dictionary<int, (int Plus, int Minus)>();
         foreach (var cells in collector.Layers.Values)
             foreach (var cell in cells)

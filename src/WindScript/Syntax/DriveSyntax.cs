@@ -10,7 +10,10 @@ internal sealed record DcTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Curr
 
 /// <summary><c>sine 12 A rms at 50 Hz phase -30 deg</c>: i = Î·cos(ωt + φ).</summary>
 internal sealed record SineTermSyntax(KeywordSyntax Keyword, ExpressionSyntax Amplitude, KeywordSyntax Measure, ExpressionSyntax Frequency, ExpressionSyntax? Phase, TextSpan Span)
-    : WaveTermSyntax(Span);
+    : WaveTermSyntax(Span)
+{
+    public AmplitudeMeasure MeasureKind => Vocabulary.Measure(Measure.Text)!.Measure;
+}
 
 /// <summary>A term with the sign it is added with.</summary>
 internal sealed record SignedTermSyntax(bool Negated, WaveTermSyntax Term, TextSpan Span) : SyntaxNode(Span);

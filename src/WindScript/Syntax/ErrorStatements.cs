@@ -57,7 +57,7 @@ internal static class ErrorStatements
         int start = StatementStart(tokens, at);
         var kind = SyntaxErrorKind.Unexpected;
         // An unknown word at the start of a line is the mistake, whatever follows it.
-        if (tokens[start].Kind == TokenKind.Word && !Keywords.IsReserved(tokens[start].Text)
+        if (tokens[start].Kind == TokenKind.Word && !Vocabulary.IsReserved(tokens[start].Text)
             && (start + 1 >= tokens.Length || tokens[start + 1].Kind != TokenKind.Equals))
         {
             at = start;

@@ -50,7 +50,7 @@ internal static class Parser
     private static readonly Parser<Token, Token> Plus = Kind(TokenKind.Plus, "'+'");
 
     private static readonly Parser<Token, NameSyntax> Name =
-        Token(t => t.Kind == TokenKind.Word && !Keywords.IsReserved(t.Text)).Labelled("a name").Select(NameSyntax.From);
+        Token(t => t.Kind == TokenKind.Word && !Vocabulary.IsReserved(t.Text)).Labelled("a name").Select(NameSyntax.From);
 
     private static readonly Parser<Token, Unit> EndOfStatement = OneOf(
         NewLine.IgnoreResult(),
@@ -105,11 +105,11 @@ internal static class Parser
 
     private static readonly Parser<Token, StatementSyntax> Let = Map(
         (kw, name, _, value) => (StatementSyntax)new LetSyntax(KeywordSyntax.From(kw), name, value, kw.Span.Cover(value.Span)),
-        Keyword("let"), Name, EqualsSign, Expression);
+        Keyword(Vocabulary.Let), Name, EqualsSign, Expression);
 
     private static readonly Parser<Token, StatementSyntax> Property = Map(
         (kw, value) => (StatementSyntax)new PropertySyntax(KeywordSyntax.From(kw), value, kw.Span.Cover(value.Span)),
-        KeywordIn(Keywords.Properties, "a property such as slots, turns or pitch"), Expression);
+        KeywordIn(Vocabulary.PropertyWords, "a property such as slots, turns or pitch"), Expression);
 
     private static readonly Parser<Token, StatementSyntax> Phases = Map(
         (kw, names) =>
@@ -117,13 +117,13 @@ internal static class Parser
             var list = names.ToArray();
             return (StatementSyntax)new PhasesSyntax(KeywordSyntax.From(kw), list, kw.Span.Cover(list[^1].Span));
         },
-        Keyword("phases"), Name.AtLeastOnce());
+        Keyword(Vocabulary.PhasesWord), Name.AtLeastOnce());
 
     private static readonly Parser<Token, StatementSyntax> Flag =
-        KeywordIn(Keywords.Flags, "'neutral'").Select(kw => (StatementSyntax)new FlagSyntax(KeywordSyntax.From(kw), kw.Span));
+        KeywordIn(Vocabulary.FlagWords, $"'{Vocabulary.Neutral}'").Select(kw => (StatementSyntax)new FlagSyntax(KeywordSyntax.From(kw), kw.Span));
 
     private static readonly Parser<Token, PatternEntrySyntax> PatternEntry = OneOf(
-        Token(t => t.Kind == TokenKind.Word && t.Text == "_").Select(t => new PatternEntrySyntax(null, null, t.Span)),
+        Token(t => t.Kind == TokenKind.Word && t.Text == Vocabulary.EmptySlot).Select(t => new PatternEntrySyntax(null, null, t.Span)),
         Map((sign, name) => new PatternEntrySyntax(sign.HasValue ? sign.Value : null, name,
                 sign.HasValue ? sign.Value.Span.Cover(name.Span) : name.Span),
             Minus.Or(Plus).Optional(), Name)).Labelled("a phase such as U or -U, or '_'");
@@ -135,16 +135,16 @@ internal static class Parser
             var end = repeat.HasValue ? repeat.Value.Span : list.Length > 0 ? list[^1].Span : head.Colon.Span;
             return (StatementSyntax)new PatternSyntax(KeywordSyntax.From(head.Layer), list, repeat.GetValueOrDefault(), head.Layer.Span.Cover(end));
         },
-        Try(Map((layer, colon) => (Layer: layer, Colon: colon), KeywordIn(Keywords.PatternLayers, "a layer such as top"), Colon)),
+        Try(Map((layer, colon) => (Layer: layer, Colon: colon), KeywordIn(Vocabulary.LayerWords, "a layer such as top"), Colon)),
         PatternEntry.Many(),
-        Keyword("repeat").Then(Expression).Optional());
+        Keyword(Vocabulary.Repeat).Then(Expression).Optional());
 
-    private static readonly Parser<Token, KeywordSyntax> LayerName =
-        Keyword("top").Or(Keyword("bottom")).Labelled("'top' or 'bottom'").Select(KeywordSyntax.From);
+    private static readonly Parser<Token, KeywordSyntax> CoilLayerWord =
+        Keyword(Vocabulary.Word(LayerName.Top)).Or(Keyword(Vocabulary.Word(LayerName.Bottom))).Labelled("'top' or 'bottom'").Select(KeywordSyntax.From);
 
     private static readonly Parser<Token, CoilOptionSyntax> CoilOption = OneOf(
-        Map((kw, e) => (CoilOptionSyntax)new CoilTurnsSyntax(KeywordSyntax.From(kw), e, kw.Span.Cover(e.Span)), Keyword("turns"), Expression),
-        Map((kw, l) => (CoilOptionSyntax)new CoilLayerSyntax(KeywordSyntax.From(kw), l, kw.Span.Cover(l.Span)), Keyword("layer"), LayerName));
+        Map((kw, e) => (CoilOptionSyntax)new CoilTurnsSyntax(KeywordSyntax.From(kw), e, kw.Span.Cover(e.Span)), Keyword(Vocabulary.Word(PropertyName.Turns)), Expression),
+        Map((kw, l) => (CoilOptionSyntax)new CoilLayerSyntax(KeywordSyntax.From(kw), l, kw.Span.Cover(l.Span)), Keyword(Vocabulary.Layer), CoilLayerWord));
 
     private static readonly Parser<Token, StatementSyntax> Coil = Map(
         (kw, sign, phase, go, ret, options) =>
@@ -153,7 +153,7 @@ internal static class Parser
             var end = opts.Length > 0 ? opts[^1].Span : ret.Span;
             return (StatementSyntax)new CoilSyntax(KeywordSyntax.From(kw), sign.HasValue ? sign.Value : null, phase, go, ret, opts, kw.Span.Cover(end));
         },
-        Keyword("coil"),
+        Keyword(Vocabulary.Coil),
         Minus.Optional(),
         Name.Before(Colon),
         Expression.Before(Arrow),
@@ -163,15 +163,15 @@ internal static class Parser
     private static readonly Parser<Token, SineTermSyntax> Sine = Map(
         (kw, amplitude, measure, _, frequency, phase) => new SineTermSyntax(KeywordSyntax.From(kw), amplitude, KeywordSyntax.From(measure), frequency, phase.GetValueOrDefault(),
             kw.Span.Cover(phase.HasValue ? phase.Value.Span : frequency.Span)),
-        Keyword("sine"),
+        Keyword(Vocabulary.Sine),
         SignedPrimary,
-        Keyword("peak").Or(Keyword("rms")).Labelled("'peak' or 'rms'"),
-        Keyword("at"),
+        KeywordIn(Vocabulary.MeasureWords, "'peak' or 'rms'"),
+        Keyword(Vocabulary.At),
         SignedPrimary,
-        Keyword("phase").Then(SignedPrimary).Optional());
+        Keyword(Vocabulary.Phase).Then(SignedPrimary).Optional());
 
     private static readonly Parser<Token, WaveTermSyntax> Dc = Map(
-        (kw, value) => (WaveTermSyntax)new DcTermSyntax(KeywordSyntax.From(kw), value, kw.Span.Cover(value.Span)), Keyword("dc"), SignedPrimary);
+        (kw, value) => (WaveTermSyntax)new DcTermSyntax(KeywordSyntax.From(kw), value, kw.Span.Cover(value.Span)), Keyword(Vocabulary.Dc), SignedPrimary);
 
     private static readonly Parser<Token, WaveTermSyntax> WaveTerm =
         OneOf(Sine.Select(s => (WaveTermSyntax)s), Dc);
@@ -193,7 +193,7 @@ internal static class Parser
             var list = names.ToArray();
             return (StatementSyntax)new BalancedSyntax(KeywordSyntax.From(kw), wave, KeywordSyntax.From(seqKw), list, kw.Span.Cover(list[^1].Span));
         },
-        Keyword("balanced"), Sine, Keyword("sequence"), Name.AtLeastOnce());
+        Keyword(Vocabulary.Balanced), Sine, Keyword(Vocabulary.Sequence), Name.AtLeastOnce());
 
     private static readonly Parser<Token, StatementSyntax> Statement = Rec(() => StatementRule!);
 
@@ -211,7 +211,7 @@ internal static class Parser
 
     private static readonly Parser<Token, StatementSyntax> Block = Map(
         (kw, name, body) => (StatementSyntax)new BlockSyntax(KeywordSyntax.From(kw), name, body.Body, body.Closed, kw.Span.Cover(body.End)),
-        KeywordIn(Keywords.Blocks, "a block such as machine, winding or drive"),
+        KeywordIn(Vocabulary.BlockWords, "a block such as machine, winding or drive"),
         BlockName,
         Body);
 
@@ -219,11 +219,11 @@ internal static class Parser
     private static readonly Parser<Token, StatementSyntax> For = Map(
         (kw, variable, from, to, step, body) =>
             (StatementSyntax)new ForSyntax(KeywordSyntax.From(kw), variable, from, to, step.GetValueOrDefault(), body.Body, body.Closed, kw.Span.Cover(body.End)),
-        Keyword("for"),
-        Name.Before(Keyword("in")),
+        Keyword(Vocabulary.For),
+        Name.Before(Keyword(Vocabulary.In)),
         Expression.Before(DotDot),
         Expression,
-        Keyword("step").Then(Expression).Optional(),
+        Keyword(Vocabulary.Step).Then(Expression).Optional(),
         Body);
 
     private static readonly Parser<Token, StatementSyntax> AnyStatement = OneOf(
@@ -239,16 +239,16 @@ internal static class Parser
     {
         var table = new Dictionary<string, Parser<Token, StatementSyntax>>(StringComparer.Ordinal)
         {
-            ["let"] = Let,
-            ["phases"] = Phases,
-            ["for"] = For,
-            ["coil"] = Coil,
-            ["balanced"] = Balanced,
+            [Vocabulary.Let] = Let,
+            [Vocabulary.PhasesWord] = Phases,
+            [Vocabulary.For] = For,
+            [Vocabulary.Coil] = Coil,
+            [Vocabulary.Balanced] = Balanced,
         };
-        foreach (var word in Keywords.Blocks) table[word] = Block;
-        foreach (var word in Keywords.Flags) table[word] = Flag;
-        foreach (var word in Keywords.Properties) table[word] = Property;
-        foreach (var word in Keywords.PatternLayers) table[word] = Keywords.Properties.Contains(word) ? PatternOrProperty : Pattern;
+        foreach (var word in Vocabulary.BlockWords) table[word] = Block;
+        foreach (var word in Vocabulary.FlagWords) table[word] = Flag;
+        foreach (var word in Vocabulary.PropertyWords) table[word] = Property;
+        foreach (var word in Vocabulary.LayerWords) table[word] = Vocabulary.PropertyWords.Contains(word) ? PatternOrProperty : Pattern;
         return table;
     }
 
@@ -256,7 +256,7 @@ internal static class Parser
         Lookahead(Any).Then(first => first.Kind != TokenKind.Word
             ? AnyStatement
             : ByKeyword.TryGetValue(first.Text, out var parser) ? parser
-            : Keywords.IsReserved(first.Text) ? AnyStatement : PhaseCurrent);
+            : Vocabulary.IsReserved(first.Text) ? AnyStatement : PhaseCurrent);
 
     // Skips the rest of a broken statement: to the end of its line, or over a whole braced
     // body if the line opened one, so the body's lines are not misread as outer statements.

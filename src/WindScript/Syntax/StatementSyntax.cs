@@ -9,7 +9,11 @@ internal abstract record StatementSyntax(TextSpan Span) : SyntaxNode(Span);
 internal sealed record LetSyntax(KeywordSyntax Keyword, NameSyntax Name, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span);
 
 /// <summary>A keyword with one value: <c>slots 36</c>, <c>bore 150 mm</c>, <c>turns 11</c>, <c>pitch 7 slots</c>.</summary>
-internal sealed record PropertySyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span);
+internal sealed record PropertySyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : StatementSyntax(Span)
+{
+    /// <summary>The property's entry in the vocabulary (the parser reads only words that have one).</summary>
+    public PropertyWord Property => Vocabulary.Property(Keyword.Text)!;
+}
 
 /// <summary><c>phases U V W</c>.</summary>
 internal sealed record PhasesSyntax(KeywordSyntax Keyword, IReadOnlyList<NameSyntax> Names, TextSpan Span) : StatementSyntax(Span);
@@ -23,7 +27,10 @@ internal sealed record FlagSyntax(KeywordSyntax Keyword, TextSpan Span) : Statem
 /// when none is written; <see cref="Closed"/> is false when the closing brace is missing.
 /// </summary>
 internal sealed record BlockSyntax(KeywordSyntax Keyword, NameSyntax Name, IReadOnlyList<StatementSyntax> Body, bool Closed, TextSpan Span)
-    : StatementSyntax(Span);
+    : StatementSyntax(Span)
+{
+    public BlockKind Kind => Vocabulary.Block(Keyword.Text)!.Kind;
+}
 
 /// <summary><c>for k in 0 .. 11 step 1 { ... }</c>: the range is inclusive at both ends.</summary>
 internal sealed record ForSyntax(KeywordSyntax Keyword, NameSyntax Variable, ExpressionSyntax From, ExpressionSyntax To, ExpressionSyntax? Step,
@@ -50,6 +57,9 @@ internal sealed record CoilSyntax(
 
     /// <summary>The first <c>layer</c> option's layer: the go side's layer.</summary>
     public KeywordSyntax? Layer => Options.OfType<CoilLayerSyntax>().FirstOrDefault()?.Layer;
+
+    /// <summary>The go side's layer as written, or null when the coil does not say.</summary>
+    public LayerName? GoLayer => Options.OfType<CoilLayerSyntax>().FirstOrDefault()?.LayerKind;
 }
 
 /// <summary>An option after a coil's slots, introduced by its keyword.</summary>
@@ -59,7 +69,10 @@ internal abstract record CoilOptionSyntax(KeywordSyntax Keyword, TextSpan Span) 
 internal sealed record CoilTurnsSyntax(KeywordSyntax Keyword, ExpressionSyntax Value, TextSpan Span) : CoilOptionSyntax(Keyword, Span);
 
 /// <summary><c>layer bottom</c> on a coil.</summary>
-internal sealed record CoilLayerSyntax(KeywordSyntax Keyword, KeywordSyntax Layer, TextSpan Span) : CoilOptionSyntax(Keyword, Span);
+internal sealed record CoilLayerSyntax(KeywordSyntax Keyword, KeywordSyntax Layer, TextSpan Span) : CoilOptionSyntax(Keyword, Span)
+{
+    public LayerName LayerKind => Vocabulary.LayerOf(Layer.Text)!.Name;
+}
 
 /// <summary>One entry of a slot pattern: a phase with its sign token (<c>-</c>, <c>+</c> or none), or '_' for an empty position.</summary>
 internal sealed record PatternEntrySyntax(Token? Sign, NameSyntax? Phase, TextSpan Span) : SyntaxNode(Span)
@@ -72,7 +85,10 @@ internal sealed record PatternEntrySyntax(Token? Sign, NameSyntax? Phase, TextSp
 /// slot 1. Several lines for the same layer continue one another.
 /// </summary>
 internal sealed record PatternSyntax(KeywordSyntax Layer, IReadOnlyList<PatternEntrySyntax> Entries, ExpressionSyntax? Repeat, TextSpan Span)
-    : StatementSyntax(Span);
+    : StatementSyntax(Span)
+{
+    public LayerName LayerKind => Vocabulary.LayerOf(Layer.Text)!.Name;
+}
 
 /// <summary>What went wrong on a line the parser could not read.</summary>
 internal enum SyntaxErrorKind

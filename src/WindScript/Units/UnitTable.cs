@@ -19,7 +19,7 @@ internal static class UnitTable
         new("deg", Dimension.AngleDim, Math.PI / 180),
         new("rad", Dimension.AngleDim, 1.0),
         new("slots", Dimension.SlotDim, 1.0),
-        new("slot", Dimension.SlotDim, 1.0),
+        new("slot", Dimension.SlotDim, 1.0) { IsAlias = true },
         new("s", Dimension.TimeDim, 1.0),
         new("ms", Dimension.TimeDim, 1e-3),
         new("T", Dimension.FluxDensity, 1.0),

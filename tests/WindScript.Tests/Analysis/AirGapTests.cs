@@ -56,7 +56,7 @@ public class AirGapTests
         Assert.Equal(mmf, lineIntegral, 8);
         double mid = (bore + rotor) / 2;
         Assert.Equal(AirGapField.RadialFluxDensity(mmf, rotor, bore, rotor) * rotor, AirGapField.RadialFluxDensity(mmf, rotor, bore, mid) * mid, 12);
-        var field = AirGapField.Describe(mmf, rotor, bore, 1.0);
+        var field = AirGapField.OfHarmonic(mmf, 1, rotor, bore, 1.0);
         Assert.True(field.RotorDeviation > 0 && field.BoreDeviation < 0);
         // Mean of B across the gap (numerically) equals the constant-field value μ0F/δ: both carry the same MMF.
         double mean = Integrate.OnClosedInterval(r => AirGapField.RadialFluxDensity(mmf, rotor, bore, r), rotor, bore) / (bore - rotor);
@@ -67,7 +67,7 @@ public class AirGapTests
     public void Thin_gap_limit_of_the_radial_model_is_the_constant_field_with_first_order_deviation()
     {
         double bore = 0.075, gap = 0.0005;
-        var f = AirGapField.Describe(1000, bore - gap, bore, carter: 1.1);
+        var f = AirGapField.OfHarmonic(1000, 1, bore - gap, bore, carter: 1.1);
         Assert.InRange(f.RotorDeviation / (gap / (2 * bore)), 0.99, 1.01);    // ≈ +δ/2r
         Assert.InRange(f.BoreDeviation / (-gap / (2 * bore)), 0.99, 1.01);    // ≈ −δ/2r
         Assert.Equal(AirGapField.Mu0 * 1000 / (1.1 * gap), f.FluxDensity, 12);

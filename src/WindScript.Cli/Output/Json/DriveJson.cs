@@ -39,7 +39,7 @@ public sealed record MmfHarmonicJson(
     public static MmfHarmonicJson From(MmfHarmonic h) => new(h.Order, h.ElectricalOrder, h.Amplitude);
 }
 
-/// <summary>Field figures of one MMF amplitude: thin gap (Carter) and the radial models.</summary>
+/// <summary>Field figures of one MMF amplitude: thin gap (Carter), the flux-tube (1/r) approximation and the exact 2-D field.</summary>
 public sealed record GapFieldJson(
     [property: JsonPropertyName("mmf")] double Mmf,
     [property: JsonPropertyName("effectiveGap")] double EffectiveGap,
@@ -49,11 +49,16 @@ public sealed record GapFieldJson(
     [property: JsonPropertyName("radialFluxDensityAtRotor")] double RadialFluxDensityAtRotor,
     [property: JsonPropertyName("radialFluxDensityAtBore")] double RadialFluxDensityAtBore,
     [property: JsonPropertyName("rotorDeviation")] double RotorDeviation,
-    [property: JsonPropertyName("boreDeviation")] double BoreDeviation)
+    [property: JsonPropertyName("boreDeviation")] double BoreDeviation,
+    [property: JsonPropertyName("exactFluxDensityAtRotor")] double ExactFluxDensityAtRotor,
+    [property: JsonPropertyName("exactFluxDensityAtBore")] double ExactFluxDensityAtBore,
+    [property: JsonPropertyName("fluxTubeDeviationAtRotor")] double FluxTubeDeviationAtRotor,
+    [property: JsonPropertyName("fluxTubeDeviationAtBore")] double FluxTubeDeviationAtBore)
 {
     public static GapFieldJson? From(GapField? f) => f is null ? null : new(
         f.Mmf, f.EffectiveGap, f.FieldStrength, f.FluxDensity, f.ConstantFieldFluxDensity,
-        f.RadialFluxDensityAtRotor, f.RadialFluxDensityAtBore, f.RotorDeviation, f.BoreDeviation);
+        f.RadialFluxDensityAtRotor, f.RadialFluxDensityAtBore, f.RotorDeviation, f.BoreDeviation,
+        f.ExactFluxDensityAtRotor, f.ExactFluxDensityAtBore, f.FluxTubeDeviationAtRotor, f.FluxTubeDeviationAtBore);
 }
 
 /// <summary>A drive at the instant: currents, waves, MMF staircase, field and back-EMF.</summary>

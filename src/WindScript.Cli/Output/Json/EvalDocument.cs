@@ -113,10 +113,11 @@ public sealed record InductancesJson(
     [property: JsonPropertyName("matrix")] IReadOnlyList<IReadOnlyList<double>> Matrix,
     [property: JsonPropertyName("synchronous")] double Synchronous,
     [property: JsonPropertyName("meanRadius")] double MeanRadius,
-    [property: JsonPropertyName("effectiveGap")] double EffectiveGap)
+    [property: JsonPropertyName("effectiveGap")] double EffectiveGap,
+    [property: JsonPropertyName("thickGap")] bool ThickGap)
 {
     public static InductancesJson? From(InductanceMatrix? i) =>
-        i is null ? null : new([.. i.Matrix.Select(row => (IReadOnlyList<double>)row)], i.Synchronous, i.MeanRadius, i.EffectiveGap);
+        i is null ? null : new([.. i.Matrix.Select(row => (IReadOnlyList<double>)row)], i.Synchronous, i.MeanRadius, i.EffectiveGap, i.ThickGap);
 }
 
 /// <summary>EMF constants of one phase.</summary>
