@@ -33,7 +33,8 @@ public static class SweepCommand
             DefaultValueFactory = _ => "pole",
         };
         var orders = new Option<int>("--orders", "-N") { Description = "Winding factors at electrical orders 1..N", DefaultValueFactory = _ => 49 };
-        var format = CommonOptions.Format("jsonl", "jsonl", "csv");
+        var format = CommonOptions.Format("jsonl", "jsonl", "csv", "parquet");
+        format.Description += " (parquet needs --output)";
         var shard = new Option<string?>("--shard")
         {
             Description = "Write only part K of N (K/N); the parts concatenated in order are the whole output. "
@@ -76,6 +77,7 @@ public static class SweepCommand
         if (error is not null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--shard: " + error;
         if (error is null && a.Threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {a.Threads}";
         if (error is null && a.SkipExisting && a.Output is null) error = "--skip-existing needs --output FILE";
+        if (error is null && a.Format == "parquet" && a.Output is null) error = "--format parquet writes a file: add --output FILE (e.g. -o sweep.parquet)";
         SweepSpec? spec = null;
         if (error is null)
         {
@@ -109,7 +111,8 @@ public static class SweepCommand
         }
         using (part)
         {
-            WriteRecords(io, spec, shard, a, part?.Stream);
+            if (a.Format == "parquet") WriteParquet(io, spec, shard, a, part!.Stream);
+            else WriteRecords(io, spec, shard, a, part?.Stream);
             part?.Commit();
         }
         return ExitCodes.Ok;
@@ -135,6 +138,28 @@ public static class SweepCommand
                 progress?.Report(done);
             });
         output.Flush();
+        progress?.Finish();
+    }
+
+    private static void WriteParquet(CliIO io, SweepSpec spec, SweepShard shard, Arguments a, Stream file)
+    {
+        var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
+        var parquet = new SweepParquet(file, a.Orders);
+        long done = 0;
+        OrderedBatches.Run(
+            SweepPlan.Shard(spec, shard), a.Threads, batchSize: 16, window: 8 * a.Threads,
+            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: new SweepParquet.Encoding()),
+            (state, candidate, buffer) =>
+            {
+                if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, buffer);
+            },
+            (bytes, count) =>
+            {
+                parquet.Add(bytes.Span);
+                done += count;
+                progress?.Report(done);
+            });
+        parquet.Finish();
         progress?.Finish();
     }
 

@@ -13,16 +13,18 @@ namespace WindScript.Sweep;
 /// AWS_BATCH_JOB_ARRAY_INDEX = 0..N−1, N given. Slurm job arrays: with N given, the array is
 /// numbered 1..N and K = SLURM_ARRAY_TASK_ID (so a rerun of some tasks, <c>--array=3,7</c>, keeps
 /// their numbers); without it, K = ID − MIN + 1 and N = MAX − MIN + 1 or COUNT, which must agree
-/// (a stepped or sparse array does not give a contiguous 1..N).
+/// (a stepped or sparse array does not give a contiguous 1..N). Anything else (a CI matrix): the
+/// job sets WINDSCRIPT_SHARD = K/N, so the command is the same on every scheduler.
 /// </remarks>
 internal static class SchedulerShard
 {
     public const string Kubernetes = "JOB_COMPLETION_INDEX";
     public const string SlurmId = "SLURM_ARRAY_TASK_ID", SlurmMin = "SLURM_ARRAY_TASK_MIN", SlurmMax = "SLURM_ARRAY_TASK_MAX", SlurmCount = "SLURM_ARRAY_TASK_COUNT";
     public const string AwsBatch = "AWS_BATCH_JOB_ARRAY_INDEX";
+    public const string Generic = "WINDSCRIPT_SHARD";
 
     /// <summary>The variables <c>--shard auto</c> reads, for help text and messages.</summary>
-    public static readonly string Variables = $"{Kubernetes} (Kubernetes Indexed Job), {SlurmId} with {SlurmMin}/{SlurmMax} or {SlurmCount} (Slurm job array), {AwsBatch} (AWS Batch array job)";
+    public static readonly string Variables = $"{Kubernetes} (Kubernetes Indexed Job), {SlurmId} with {SlurmMin}/{SlurmMax} or {SlurmCount} (Slurm job array), {AwsBatch} (AWS Batch array job), {Generic}=K/N (a CI matrix or any other)";
 
     /// <summary>The shard and where it came from, or null with a usage message.</summary>
     /// <param name="environment">Looks a variable up; null when it is not set.</param>
@@ -33,7 +35,7 @@ internal static class SchedulerShard
         error = null;
         if (shards is < 1) { error = $"--shards must be at least 1, not {shards}"; return null; }
         var found = new List<(SweepShard Shard, string Source)>();
-        foreach (var read in new Func<Func<string, string?>, int?, (SweepShard, string)?>[] { FromKubernetes, FromSlurm, FromAwsBatch })
+        foreach (var read in new Func<Func<string, string?>, int?, (SweepShard, string)?>[] { FromKubernetes, FromSlurm, FromAwsBatch, FromGeneric })
         {
             string? problem = null;
             var one = Try(read, environment, shards, ref problem);
@@ -62,6 +64,15 @@ internal static class SchedulerShard
     private static (SweepShard, string)? FromKubernetes(Func<string, string?> env, int? shards) => ZeroBased(env, Kubernetes, shards, "a Kubernetes Indexed Job: set it to the Job's completions");
 
     private static (SweepShard, string)? FromAwsBatch(Func<string, string?> env, int? shards) => ZeroBased(env, AwsBatch, shards, "an AWS Batch array job: set it to the array size");
+
+    private static (SweepShard, string)? FromGeneric(Func<string, string?> env, int? shards)
+    {
+        var text = env(Generic);
+        if (string.IsNullOrWhiteSpace(text)) return null;
+        if (SweepShard.Parse(text.Trim(), out _) is not { } shard) throw new FormatException($"{Generic}='{text}' is not K/N with 1 <= K <= N");
+        if (shards is { } n && n != shard.Count) throw new FormatException($"{Generic}={text} and --shards {n} disagree");
+        return (shard, $"{Generic}={text.Trim()}");
+    }
 
     private static (SweepShard, string)? ZeroBased(Func<string, string?> env, string name, int? shards, string hint)
     {

@@ -31,11 +31,12 @@ internal static class ClusterSweep
             ["SLURM_ARRAY_TASK_COUNT"] = $"{n}", ["SLURM_ARRAY_JOB_ID"] = "4242",
         },
         "aws" => new() { ["AWS_BATCH_JOB_ARRAY_INDEX"] = $"{k - 1}", ["AWS_BATCH_JOB_ID"] = "job:1" },
+        "matrix" => new() { ["WINDSCRIPT_SHARD"] = $"{k}/{n}", ["GITHUB_ACTIONS"] = "true" },
         _ => throw new ArgumentException(scheduler),
     };
 
     /// <summary>The arguments each scheduler's job file passes besides the sweep itself.</summary>
-    public static string[] AutoArguments(string scheduler, int n) => scheduler == "slurm" ? ["--shard", "auto"] : ["--shard", "auto", "--shards", $"{n}"];
+    public static string[] AutoArguments(string scheduler, int n) => scheduler is "slurm" or "matrix" ? ["--shard", "auto"] : ["--shard", "auto", "--shards", $"{n}"];
 
     /// <summary>Concatenates parts as the merge step does: everything of part 1, and for CSV every later part without its header line.</summary>
     public static string Merge(IEnumerable<string> parts, bool csv) =>

@@ -103,5 +103,14 @@ public class SchedulerShardTests
     }
 
     [Fact]
+    public void A_ci_matrix_sets_windscript_shard()
+    {
+        Assert.Equal(new SweepShard(2, 4), Resolve(Env(("WINDSCRIPT_SHARD", "2/4"))));
+        Assert.Contains("WINDSCRIPT_SHARD='5/4'", Refused(Env(("WINDSCRIPT_SHARD", "5/4"))));
+        Assert.Contains("disagree", Refused(Env(("WINDSCRIPT_SHARD", "2/4")), 8));
+        Assert.Contains("disagree", Refused(Env(("WINDSCRIPT_SHARD", "2/4"), ("SLURM_ARRAY_TASK_ID", "3"), ("SLURM_ARRAY_TASK_MIN", "1"), ("SLURM_ARRAY_TASK_MAX", "4"))));
+    }
+
+    [Fact]
     public void Shards_must_be_positive() => Assert.Contains("at least 1", Refused(Env(("JOB_COMPLETION_INDEX", "0")), 0));
 }

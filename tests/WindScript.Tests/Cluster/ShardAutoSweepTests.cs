@@ -16,6 +16,8 @@ public class ShardAutoSweepTests
     [InlineData("slurm", "csv", 4)]
     [InlineData("aws", "jsonl", 3)]
     [InlineData("aws", "csv", 6)]
+    [InlineData("matrix", "jsonl", 4)]
+    [InlineData("matrix", "csv", 2)]
     public void Parts_from_every_task_of_a_scheduler_merge_into_the_single_run(string scheduler, string format, int n)
     {
         string[] args = [.. Sweep, "--format", format];
