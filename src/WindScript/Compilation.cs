@@ -44,7 +44,7 @@ public sealed class Compilation
     {
         var syntax = SyntaxTree.Parse(source);
         // A refused file has nothing to evaluate: its one diagnostic says why.
-        var semantics = syntax.TooDeep ? new Evaluator.Result(null, new SemanticModel(), []) : Evaluator.Evaluate(syntax);
+        var semantics = syntax.Refused ? new Evaluator.Result(null, new SemanticModel(), []) : Evaluator.Evaluate(syntax);
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)

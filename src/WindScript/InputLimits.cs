@@ -35,4 +35,16 @@ public static class InputLimits
 
     /// <summary>Highest electrical order evaluated (<c>--orders</c>).</summary>
     public const int MaxOrders = 1000;
+
+    /// <summary>
+    /// Most mechanical orders one evaluation computes (electrical orders times pole pairs): the
+    /// cost of the spectrum grows with it. The default 25 orders stay within it up to 1,000 poles.
+    /// </summary>
+    public const int MaxMechanicalOrders = 25_000;
+
+    /// <summary>
+    /// Largest magnitude of a dimensioned value, in SI units (m, A, Hz, rad, T) (WS2042): far beyond
+    /// any machine, and small enough that no product of the analysis can overflow.
+    /// </summary>
+    public const double MaxMagnitude = 1e12;
 }

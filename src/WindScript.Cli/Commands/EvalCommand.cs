@@ -48,6 +48,11 @@ public static class EvalCommand
             io.Err.WriteLine($"{input.DisplayName}: cannot evaluate: the file does not describe a complete machine and winding");
             return ExitCodes.Findings;
         }
+        if ((long)orders * design.PolePairs > InputLimits.MaxMechanicalOrders)
+        {
+            io.Err.WriteLine($"windscript eval: --orders {orders} at {design.Poles} poles asks for {(long)orders * design.PolePairs:N0} mechanical orders, more than the limit of {InputLimits.MaxMechanicalOrders:N0} (--orders {Math.Max(1, InputLimits.MaxMechanicalOrders / design.PolePairs)} at most for this file)");
+            return ExitCodes.Usage;
+        }
         var result = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = orders, Time = time });
         switch (format)
         {

@@ -46,7 +46,21 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
         finally { _angleContext = saved; }
     }
 
+    /// <summary>The value, or null after one diagnostic; never infinite or NaN (WS2042 at the first place that would be).</summary>
     public Quantity? Evaluate(ExpressionSyntax expression, Scope scope)
+    {
+        var value = EvaluateAny(expression, scope);
+        if (value is { } q && !double.IsFinite(q.Value))
+        {
+            diagnostics.Add(DiagnosticCatalog.NumberOutOfRange, expression.Span, expression is NumberSyntax n
+                ? $"{n.Literal}{(n.Unit is null ? "" : " " + n.Unit.Text)} is beyond the range of numbers (about ±1.8e308)"
+                : "the result is beyond the range of numbers (about ±1.8e308) or undefined");
+            return null;
+        }
+        return value;
+    }
+
+    private Quantity? EvaluateAny(ExpressionSyntax expression, Scope scope)
     {
         switch (expression)
         {
@@ -94,11 +108,44 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
         return symbol.Value;
     }
 
+    /// <summary>
+    /// A chain like 1 + 2 - 3 * 4 ... is a left-deep tree: walk its left spine in a loop, so the
+    /// stack grows with bracket nesting (at most <see cref="Syntax.SyntaxTree.MaxNesting"/>), never with the chain's length.
+    /// </summary>
     private Quantity? EvaluateBinary(BinaryExpressionSyntax binary, Scope scope)
     {
-        var left = Evaluate(binary.Left, scope);
-        var right = Evaluate(binary.Right, scope);
-        if (left is not { } l || right is not { } r) return null;
+        var spine = new Stack<BinaryExpressionSyntax>();
+        ExpressionSyntax leftmost = binary;
+        while (leftmost is BinaryExpressionSyntax b)
+        {
+            spine.Push(b);
+            leftmost = b.Left;
+        }
+        var value = Evaluate(leftmost, scope);
+        bool failed = value is null;
+        while (spine.Count > 0)
+        {
+            var node = spine.Pop();
+            // Every right operand is evaluated (and reports its own problems) even after a failure.
+            var right = Evaluate(node.Right, scope);
+            if (failed || right is null)
+            {
+                failed = true;
+                continue;
+            }
+            value = Apply(node, value!.Value, right.Value);
+            if (value is null) failed = true;
+            else if (spine.Count > 0 && !double.IsFinite(value.Value.Value))
+            {
+                diagnostics.Add(DiagnosticCatalog.NumberOutOfRange, node.Span, "the result is beyond the range of numbers (about ±1.8e308) or undefined");
+                failed = true;
+            }
+        }
+        return failed ? null : value;
+    }
+
+    private Quantity? Apply(BinaryExpressionSyntax binary, Quantity l, Quantity r)
+    {
         switch (binary.Operator)
         {
             case TokenKind.Plus:
@@ -197,8 +244,23 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             diagnostics.Add(DiagnosticCatalog.InvalidArithmetic, call.Span, $"{f}() takes whole numbers");
             return null;
         }
-        long g = Model.WindingDesign.Gcd((long)a.Value, (long)b.Value);
-        return Quantity.Plain(f == "gcd" ? g : Model.WindingDesign.Lcm((long)a.Value, (long)b.Value));
+        // Beyond 2^53 not every whole number is exact, and the conversion to long could overflow.
+        const double exact = 9_007_199_254_740_992;
+        if (Math.Abs(a.Value) > exact || Math.Abs(b.Value) > exact)
+        {
+            diagnostics.Add(DiagnosticCatalog.NumberOutOfRange, call.Span, $"{f}() takes whole numbers up to 2^53 = 9007199254740992 in size");
+            return null;
+        }
+        long x = Math.Abs((long)a.Value), y = Math.Abs((long)b.Value);
+        long g = Model.WindingDesign.Gcd(x, y);
+        if (f == "gcd") return Quantity.Plain(g);
+        double lcm = g == 0 ? 0 : (double)(x / g) * y;
+        if (lcm > exact)
+        {
+            diagnostics.Add(DiagnosticCatalog.NumberOutOfRange, call.Span, "lcm() of these numbers is beyond 2^53 = 9007199254740992");
+            return null;
+        }
+        return Quantity.Plain(lcm);
     }
 
     private Quantity? ConvertAngle(CallExpressionSyntax call, AngleKind written, Quantity a)
@@ -231,7 +293,7 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
     public double? EvaluateAs(ExpressionSyntax expression, Scope scope, Dimension dimension, string what, params Dimension[] alternatives)
     {
         if (Evaluate(expression, scope) is not { } q) return null;
-        if (q.Dimension == dimension || alternatives.Contains(q.Dimension)) return q.Value;
+        if (q.Dimension == dimension || alternatives.Contains(q.Dimension)) return WithinMagnitude(expression, q.Value, what);
         if (q.Dimension.IsNone && IsBareNumber(expression))
         {
             string example = UnitTable.Example(dimension);
@@ -247,8 +309,20 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
         return null;
     }
 
-    /// <summary>Evaluates and requires a plain whole number within bounds.</summary>
-    public int? EvaluateInteger(ExpressionSyntax expression, Scope scope, string what, int min = int.MinValue, int max = int.MaxValue)
+    /// <summary>The value if its size is within <see cref="InputLimits.MaxMagnitude"/> (SI); otherwise WS2042 and null.</summary>
+    public double? WithinMagnitude(ExpressionSyntax expression, double value, string what)
+    {
+        if (Math.Abs(value) <= InputLimits.MaxMagnitude) return value;
+        diagnostics.Add(DiagnosticCatalog.NumberOutOfRange, expression.Span, $"{what} is beyond the limit of {InputLimits.MaxMagnitude:0e0} in SI units ('windscript explain WS2042')");
+        return null;
+    }
+
+    /// <summary>
+    /// Evaluates and requires a plain whole number within bounds: <paramref name="min"/> and
+    /// <paramref name="max"/> are what the quantity means (WS2012 outside), <paramref name="limit"/>
+    /// what WindScript evaluates (<see cref="InputLimits"/>; WS2040 above it).
+    /// </summary>
+    public int? EvaluateInteger(ExpressionSyntax expression, Scope scope, string what, int min = int.MinValue, int max = int.MaxValue, int limit = int.MaxValue)
     {
         if (Evaluate(expression, scope) is not { } q) return null;
         if (!q.Dimension.IsNone)
@@ -257,6 +331,17 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             return null;
         }
         double rounded = Math.Round(q.Value);
+        if (Math.Abs(q.Value - rounded) <= 1e-9 && rounded >= min && rounded > limit)
+        {
+            diagnostics.Add(DiagnosticCatalog.BeyondLimit, expression.Span, $"{what} {Format(q.Value)} is beyond the limit of {limit:N0} ('windscript explain WS2040')");
+            return null;
+        }
+        // Nothing below int.MinValue or above int.MaxValue may reach the cast.
+        if (limit == int.MaxValue && Math.Abs(q.Value - rounded) <= 1e-9 && (rounded < int.MinValue || rounded > int.MaxValue) && rounded >= min)
+        {
+            diagnostics.Add(DiagnosticCatalog.BeyondLimit, expression.Span, $"{what} {Format(q.Value)} is beyond the range of whole numbers WindScript evaluates (±2,147,483,647)");
+            return null;
+        }
         if (Math.Abs(q.Value - rounded) > 1e-9 || rounded < min || rounded > max)
         {
             string range = min == int.MinValue ? "" : max == int.MaxValue ? $" of at least {min}" : $" from {min} to {max}";

@@ -65,6 +65,11 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         var list = ImmutableArray.CreateBuilder<Phase>();
         foreach (var name in phases.Names)
         {
+            if (list.Count == InputLimits.MaxPhases)
+            {
+                diagnostics.Add(DiagnosticCatalog.BeyondLimit, name.Span, $"more than {InputLimits.MaxPhases} phases is beyond the limit ('windscript explain WS2040')");
+                break;
+            }
             if (list.Any(p => p.Name == name.Text))
             {
                 diagnostics.Add(DiagnosticCatalog.DuplicateName, name.Span, $"phase '{name.Text}' is declared twice");
@@ -92,9 +97,9 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         switch (p.Property.Name)
         {
             case PropertyName.Slots:
-                return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, 100_000), SlotsSpan = p.Span }, g);
+                return (facts with { Slots = evaluator.EvaluateInteger(p.Value, scope, "the slot count", 1, limit: InputLimits.MaxSlots), SlotsSpan = p.Span }, g);
             case PropertyName.Poles:
-                var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, 100_000);
+                var poles = evaluator.EvaluateInteger(p.Value, scope, "the pole count", 2, limit: InputLimits.MaxPoles);
                 if (poles is { } n && n % 2 != 0)
                 {
                     diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"the pole count must be even (north and south poles pair up), not {n}");
@@ -116,6 +121,8 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                 // In slot pitches, or as a mechanical angle around the bore (converted through the slot count).
                 if (evaluator.EvaluateInAngleContext(p.Value, scope, AngleKind.Mechanical) is { } q)
                 {
+                    bool known = q.Dimension == Dimension.SlotDim || q.Dimension == Dimension.AngleDim && facts.Slots is not null;
+                    if (known && evaluator.WithinMagnitude(p.Value, q.Value, "the skew") is null) return (facts, g);
                     if (q.Dimension == Dimension.SlotDim) return (facts, g with { SkewSlots = q.Value });
                     if (q.Dimension == Dimension.AngleDim && facts.Slots is { } slots) return (facts, g with { SkewSlots = q.Value * slots / (2 * Math.PI) });
                     if (q.Dimension.IsNone) evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");

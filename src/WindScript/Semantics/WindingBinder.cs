@@ -16,6 +16,20 @@ internal sealed class WindingBinder(
     PhaseTable phases, ExpansionBudget budget, List<string> defaults)
 {
     private readonly List<Coil> _coils = [];
+    private bool _coilLimitReported;
+
+    /// <summary>Adds a coil, up to <see cref="InputLimits.MaxCoils"/> (one WS2041 at the first past it).</summary>
+    private void AddCoil(Coil coil)
+    {
+        if (_coils.Count < InputLimits.MaxCoils)
+        {
+            _coils.Add(coil);
+            return;
+        }
+        if (_coilLimitReported) return;
+        _coilLimitReported = true;
+        diagnostics.Add(DiagnosticCatalog.TooManyCoils, coil.Span, $"a winding may have at most {InputLimits.MaxCoils:N0} coils; this one and the rest are not read");
+    }
     private int _layers = 2;
 
     /// <summary>Settings a group inherits from its winding and may override.</summary>
@@ -41,11 +55,11 @@ internal sealed class WindingBinder(
                     switch (p.Property.Name)
                     {
                         case PropertyName.Layers: layers = evaluator.EvaluateInteger(p.Value, scope, "the number of layers", 1, 2); layersSpan = p.Span; break;
-                        case PropertyName.Turns: turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1); break;
+                        case PropertyName.Turns: turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1, limit: InputLimits.MaxTurns); break;
                         case PropertyName.Pitch: pitch = BindPitch(p, scope); pitchSpan = p.Span; break;
-                        case PropertyName.Paths: paths = evaluator.EvaluateInteger(p.Value, scope, "the number of parallel paths", 1); pathsSpan = p.Span; break;
-                        case PropertyName.SeriesTurns: seriesTurns = evaluator.EvaluateInteger(p.Value, scope, "series turns per phase", 1); seriesSpan = p.Span; break;
-                        case PropertyName.ConductorsPerSlot: conductors = evaluator.EvaluateInteger(p.Value, scope, "conductors per slot", 1); conductorsSpan = p.Span; break;
+                        case PropertyName.Paths: paths = evaluator.EvaluateInteger(p.Value, scope, "the number of parallel paths", 1, limit: InputLimits.MaxPaths); pathsSpan = p.Span; break;
+                        case PropertyName.SeriesTurns: seriesTurns = evaluator.EvaluateInteger(p.Value, scope, "series turns per phase", 1, limit: InputLimits.MaxTurns * 1000); seriesSpan = p.Span; break;
+                        case PropertyName.ConductorsPerSlot: conductors = evaluator.EvaluateInteger(p.Value, scope, "conductors per slot", 1, limit: InputLimits.MaxTurns * 1000); conductorsSpan = p.Span; break;
                     }
                     break;
             }
@@ -154,7 +168,7 @@ internal sealed class WindingBinder(
                     LetBinder.Bind(let, scope, evaluator, diagnostics, model);
                     break;
                 case PropertySyntax { Property.Name: PropertyName.Turns } p when BlockReader.FirstTime(diagnostics, seen, p):
-                    settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1) };
+                    settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1, limit: InputLimits.MaxTurns) };
                     break;
                 case PropertySyntax { Property.Name: PropertyName.Pitch } p when BlockReader.FirstTime(diagnostics, seen, p):
                     settings = settings with { Pitch = BindPitch(p, scope), PitchSpan = p.Span };
@@ -217,7 +231,7 @@ internal sealed class WindingBinder(
         var phase = phases.Resolve(coil.Phase);
         int? go = BindSlot(coil.Go, scope);
         int? ret = BindSlot(coil.Return, scope);
-        int? turns = coil.Turns is { } t ? evaluator.EvaluateInteger(t, scope, "turns per coil", 1) : settings.Turns;
+        int? turns = coil.Turns is { } t ? evaluator.EvaluateInteger(t, scope, "turns per coil", 1, limit: InputLimits.MaxTurns) : settings.Turns;
         if (coil.Turns is null && settings.Turns is null)
             diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, coil.Span,
                 "this coil has no turns: add 'turns N' to it, or a 'turns' statement to its group or winding");
@@ -235,7 +249,7 @@ internal sealed class WindingBinder(
             return;
         }
         if (phase is null || go is null || ret is null || turns is null) return;
-        _coils.Add(new Coil { Phase = phase.Value, GoSlot = go.Value, ReturnSlot = ret.Value, GoLayer = goLayer, ReturnLayer = returnLayer, Turns = turns.Value, Polarity = coil.Reversed ? -1 : 1, Group = settings.Name, Span = coil.Span });
+        AddCoil(new Coil { Phase = phase.Value, GoSlot = go.Value, ReturnSlot = ret.Value, GoLayer = goLayer, ReturnLayer = returnLayer, Turns = turns.Value, Polarity = coil.Reversed ? -1 : 1, Group = settings.Name, Span = coil.Span });
     }
 
     // Each option once: with two turn counts (or layers) one is a mistake, and which one is not ours to guess.
@@ -290,7 +304,7 @@ internal sealed class WindingBinder(
         int repeat = 1;
         if (pattern.Repeat is { } r)
         {
-            if (evaluator.EvaluateInteger(r, scope, "a repeat count", 1) is not { } count)
+            if (evaluator.EvaluateInteger(r, scope, "a repeat count", 1, limit: (int)ExpansionBudget.Limit) is not { } count)
             {
                 collector.Broken.Add(layer);
                 return;
@@ -358,7 +372,7 @@ internal sealed class WindingBinder(
                         $"the bottom layer of slot {ret} should hold {Signed(-cell.Sign, phase)} to close the coil from top slot {s} (pitch {y})");
                     continue;
                 }
-                _coils.Add(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
+                AddCoil(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
             }
         }
         else if (bottom is not null)
@@ -368,7 +382,7 @@ internal sealed class WindingBinder(
                 var cell = bottom[s - 1];
                 if (cell.Phase is not { } phase) continue;
                 int go = Wrap(s - y + q);
-                _coils.Add(new Coil { Phase = phase, GoSlot = go, ReturnSlot = s, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = -cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
+                AddCoil(new Coil { Phase = phase, GoSlot = go, ReturnSlot = s, GoLayer = 0, ReturnLayer = 1, Turns = turns, Polarity = -cell.Sign, Group = settings.Name, Span = cell.Entry.Span });
             }
         }
     }
@@ -418,7 +432,7 @@ internal sealed class WindingBinder(
                 continue;
             }
             claimed[ret - 1] = true;
-            _coils.Add(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 0, Turns = turns, Polarity = 1, Group = group, Span = cell.Entry.Span.Cover(other.Entry.Span) });
+            AddCoil(new Coil { Phase = phase, GoSlot = s, ReturnSlot = ret, GoLayer = 0, ReturnLayer = 0, Turns = turns, Polarity = 1, Group = group, Span = cell.Entry.Span.Cover(other.Entry.Span) });
         }
         for (int s = 1; s <= q; s++)
         {

@@ -32,21 +32,45 @@ internal sealed class SyntaxTree
     /// </summary>
     public const int MaxNesting = 100;
 
-    /// <summary>True when the file was refused for nesting deeper than <see cref="MaxNesting"/>.</summary>
-    public bool TooDeep { get; private init; }
+    /// <summary>
+    /// True when the file was refused unread: larger than <see cref="InputLimits.MaxFileBytes"/>,
+    /// nested deeper than <see cref="MaxNesting"/>, or with a line of more than
+    /// <see cref="InputLimits.MaxOperatorsPerLine"/> operators. Its one diagnostic says which.
+    /// </summary>
+    public bool Refused { get; private init; }
 
     public static SyntaxTree Parse(SourceText source)
     {
+        if (source.Length > InputLimits.MaxFileBytes)
+            return RefusedTree(source, [], [], DiagnosticCatalog.FileTooLarge.At(new TextSpan(0, 0),
+                $"the file has {source.Length:N0} characters, more than the limit of {InputLimits.MaxFileBytes:N0}; it is not read"));
         var (tokens, comments) = Lexer.Lex(source.Text);
         if (FirstTooDeep(tokens) is { } bracket)
-        {
-            var span = new TextSpan(0, source.Length);
-            var diagnostic = DiagnosticCatalog.NestingTooDeep.At(bracket.Span, $"brackets are nested more than {MaxNesting} levels deep here; the file is not read");
-            return new SyntaxTree(source, tokens, comments, new CompilationUnitSyntax([], span), [diagnostic]) { TooDeep = true };
-        }
+            return RefusedTree(source, tokens, comments, DiagnosticCatalog.NestingTooDeep.At(bracket.Span,
+                $"brackets are nested more than {MaxNesting} levels deep here; the file is not read"));
+        // The evaluator and every tree walk recurse once per operand of a chain like 1 + 1 + ...;
+        // the parser itself reads chains in a loop, but nothing after it must overflow the stack.
+        if (FirstOperatorPastLimit(tokens) is { } op)
+            return RefusedTree(source, tokens, comments, DiagnosticCatalog.ExpressionTooLong.At(op.Span,
+                $"this line has more than {InputLimits.MaxOperatorsPerLine} operators; the file is not read"));
         var root = Parser.ParseTokens(tokens);
         var diagnostics = SyntaxDiagnostics.Collect(root);
         return new SyntaxTree(source, tokens, comments, root, diagnostics);
+    }
+
+    private static SyntaxTree RefusedTree(SourceText source, Token[] tokens, Comment[] comments, Diagnostic diagnostic) =>
+        new(source, tokens, comments, new CompilationUnitSyntax([], new TextSpan(0, source.Length)), [diagnostic]) { Refused = true };
+
+    private static Token? FirstOperatorPastLimit(Token[] tokens)
+    {
+        int operators = 0;
+        foreach (var t in tokens)
+        {
+            if (t.Kind == TokenKind.NewLine) operators = 0;
+            else if (t.Kind is TokenKind.Plus or TokenKind.Minus or TokenKind.Star or TokenKind.Slash or TokenKind.Percent
+                && ++operators > InputLimits.MaxOperatorsPerLine) return t;
+        }
+        return null;
     }
 
     private static Token? FirstTooDeep(Token[] tokens)

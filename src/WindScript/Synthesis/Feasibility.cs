@@ -110,7 +110,8 @@ public static class Feasibility
         for (int q = slots - 1; q >= 1; q--)
             if (IsFeasible(q, p, belts, layers)) { below = q; break; }
         // Q = 2·p·d (an integral-slot winding with q = 1 for 360/m) is always feasible, so the search ends.
-        int limit = slots + 2 * p * belts.ShiftDenominator + 2;
+        // Counts beyond the limits are not offered: nothing could evaluate them.
+        int limit = (int)Math.Min(InputLimits.MaxSlots, (long)slots + 2L * p * belts.ShiftDenominator + 2);
         for (int q = slots + 1; q <= limit; q++)
             if (IsFeasible(q, p, belts, layers)) { above = q; break; }
         return (below, above);
@@ -124,7 +125,7 @@ public static class Feasibility
         for (int pp = p - 1; pp >= 1; pp--)
             if (IsFeasible(slots, pp, belts, layers)) { below = 2 * pp; break; }
         // The star depends on p only modulo Q, so one period of p values settles it.
-        for (int pp = p + 1; pp <= p + Math.Max(1, slots); pp++)
+        for (int pp = p + 1; pp <= Math.Min(InputLimits.MaxPoles / 2, (long)p + Math.Max(1, slots)); pp++)
             if (IsFeasible(slots, pp, belts, layers)) { above = 2 * pp; break; }
         return (below, above);
     }

@@ -1,0 +1,148 @@
+using System.Text.Json;
+using WindScript.Tests.Support;
+
+namespace WindScript.Tests.Semantics;
+
+/// <summary>
+/// Issue 13, findings 1, 4, 5 and 6, each shrunk to the least input that showed it: the limits
+/// (InputLimits) are enforced with one diagnostic at the place that exceeds them, and nothing
+/// overflows, recurses without bound or reaches an output as infinity or NaN.
+/// </summary>
+public sealed class LimitTests
+{
+    private const string Machine = "machine m {\n  slots 24\n  poles 2\n  phases A\n  bore 100 mm\n  stack 60 mm\n  gap 1 mm\n}\n";
+
+    private static string Winding(string turns) => Machine + $"winding w {{\n  layers 1\n  coil A: 1 -> 13 turns {turns}\n}}\n";
+
+    private static IEnumerable<string> Codes(string text) => Compilation.Compile(text).Diagnostics.Select(d => d.Code);
+
+    /// <summary>Runs on a thread with a small stack (1 MiB, like a thread-pool thread), where per-operand recursion would overflow.</summary>
+    private static Compilation CompileOnSmallStack(string text)
+    {
+        Compilation? result = null;
+        var thread = new Thread(() => result = Compilation.Compile(text), 1 << 20);
+        thread.Start();
+        thread.Join();
+        return result!;
+    }
+
+    [Fact]
+    public void A_chain_of_16400_additions_is_refused_with_one_diagnostic_instead_of_a_stack_overflow()
+    {
+        var c = CompileOnSmallStack(Winding(string.Join(" + ", Enumerable.Repeat("1", 16_400))));
+        var d = Assert.Single(c.Diagnostics);
+        Assert.Equal("WS1021", d.Code);
+        Assert.Null(c.Design);
+    }
+
+    [Fact]
+    public void A_chain_at_the_limit_evaluates_on_a_small_stack()
+    {
+        // 1,000 operators: 1 + 1 + ... (1,001 ones), the longest chain read.
+        var c = CompileOnSmallStack(Winding(string.Join(" + ", Enumerable.Repeat("1", InputLimits.MaxOperatorsPerLine + 1))));
+        Assert.DoesNotContain(c.Diagnostics, d => d.Severity == WindScript.Diagnostics.Severity.Error);
+        Assert.Equal(InputLimits.MaxOperatorsPerLine + 1, c.Design!.Winding.Coils[0].Turns);
+    }
+
+    [Fact]
+    public void A_file_larger_than_the_limit_is_refused_unread()
+    {
+        var text = Machine + new string('#', InputLimits.MaxFileBytes) + "\n";
+        var d = Assert.Single(Compilation.Compile(text).Diagnostics);
+        Assert.Equal("WS1020", d.Code);
+    }
+
+    [Theory]
+    [InlineData("2000000000")]   // passed check, crashed eval (overflow)
+    [InlineData("100000000")]    // crashed check in a 48-coil example
+    public void Turns_beyond_the_limit_are_WS2040(string turns)
+    {
+        var d = Assert.Single(Compilation.Compile(Winding(turns)).Diagnostics, x => x.Severity == WindScript.Diagnostics.Severity.Error);
+        Assert.Equal("WS2040", d.Code);
+        Assert.Contains("10,000", d.Message);
+    }
+
+    [Fact]
+    public void Turns_beyond_the_limit_exit_1_not_3_in_eval()
+    {
+        var dir = Directory.CreateTempSubdirectory("windscript-limits-").FullName;
+        try
+        {
+            var path = Path.Combine(dir, "t.wind");
+            File.WriteAllText(path, Winding("2000000000"));
+            var r = CliRunner.Run("eval", path);
+            Assert.Equal(1, r.Exit);
+            Assert.Contains("WS2040", r.Err);
+        }
+        finally
+        {
+            Directory.Delete(dir, true);
+        }
+    }
+
+    [Fact]
+    public void Poles_beyond_the_limit_are_WS2040_at_the_pole_count()
+    {
+        var text = Machine.Replace("poles 2", "poles 100000") + "winding w {\n  layers 1\n  coil A: 1 -> 13 turns 1\n}\n";
+        var d = Assert.Single(Compilation.Compile(text).Diagnostics, x => x.Code == "WS2040");
+        Assert.Equal("100000", text.Substring(d.Span.Start, d.Span.Length));
+    }
+
+    [Theory]
+    [InlineData("1e309")]
+    [InlineData("1e300 * 1e300")]
+    [InlineData("gcd(5, 0 - 1e300)")]   // was exit 3 (negating long.MinValue)
+    [InlineData("gcd(5, 1e300)")]       // was silently 1
+    [InlineData("lcm(3000000000, 5000000001)")]
+    public void Numbers_beyond_range_are_WS2042(string expression)
+    {
+        Assert.Contains("WS2042", Codes(Winding(expression)));
+    }
+
+    [Fact]
+    public void Gcd_and_lcm_within_range_are_exact()
+    {
+        var c = Compilation.Compile(Winding("gcd(9007199254740992, 12) + lcm(4, 6) - 15"));
+        Assert.Equal(4 + 12 - 15, c.Design!.Winding.Coils[0].Turns);
+    }
+
+    [Fact]
+    public void A_loop_of_more_coils_than_the_limit_is_one_WS2041()
+    {
+        var text = Machine + "winding w {\n  layers 1\n  for k in 1 .. 100001 {\n    coil A: 1 -> 13 turns 1\n  }\n}\n";
+        var c = Compilation.Compile(text);
+        Assert.Single(c.Diagnostics, d => d.Code == "WS2041");
+    }
+
+    [Fact]
+    public void Eval_refuses_more_mechanical_orders_than_the_limit_with_a_usage_error()
+    {
+        var synth = CliRunner.Run("synth", "--slots", "999", "--poles", "1000");
+        Assert.Equal(0, synth.Exit);
+        var r = CliRunner.RunWithInput(synth.Out, "eval", "-", "--orders", "1000");
+        Assert.Equal(2, r.Exit);
+        Assert.Contains("--orders", r.Err);
+    }
+
+    [Fact]
+    public void Synth_never_suggests_counts_beyond_the_limits()
+    {
+        var r = CliRunner.Run("synth", "--slots", "1000", "--poles", "1000");
+        Assert.Equal(1, r.Exit);
+        Assert.DoesNotContain("1002 slots", r.Err);
+    }
+
+    /// <summary>Finding 6: no case file or example gives a non-finite number in eval's JSON.</summary>
+    [Fact]
+    public void Eval_json_of_every_case_and_example_has_only_finite_numbers()
+    {
+        foreach (var file in Repo.CaseFiles().Concat(Repo.ExampleFiles()))
+        {
+            var r = CliRunner.Run("eval", file, "--format", "json");
+            if (r.Out.Length == 0) continue;
+            Assert.DoesNotContain("NaN", r.Out);
+            Assert.DoesNotContain("Infinity", r.Out);
+            using var doc = JsonDocument.Parse(r.Out);
+        }
+    }
+}
