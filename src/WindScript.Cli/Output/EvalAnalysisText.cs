@@ -127,8 +127,7 @@ public static class EvalAnalysisText
     // Signed by direction: forward waves move towards increasing slot number.
     private static string Speed(TravellingWave w) => w.Kind switch
     {
-        WaveKind.Backward => G(-w.SpeedRpm),
-        WaveKind.Pulsating or WaveKind.Elliptic => "+/-" + G(w.SpeedRpm),
+        WaveKind.Pulsating or WaveKind.Elliptic => "+/-" + G(Math.Abs(w.SpeedRpm)),
         _ => G(w.SpeedRpm),
     };
 

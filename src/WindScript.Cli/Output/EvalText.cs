@@ -47,6 +47,7 @@ public static class EvalText
     private static void WriteGeometry(TextWriter o, Geometry g, int slots)
     {
         void Mm(string name, double? metres) { if (metres is { } v) o.WriteLine($"  {name,-18} {(v * 1000).ToString("0.###", Inv)} mm"); }
+        if (g.RotorOutside) o.WriteLine($"  {"rotor",-18} outside (bore = the stator's outer diameter at the gap)");
         Mm("bore diameter", g.BoreDiameter);
         Mm("stack length", g.StackLength);
         Mm("air gap", g.Gap);

@@ -243,6 +243,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         };
         var g = d.Geometry;
         var dims = new List<string>();
+        if (g.RotorOutside) dims.Add("rotor outside");
         if (g.BoreDiameter is { } bore) dims.Add($"bore {Numbers.Show(bore * 1000, 2)} mm");
         if (g.StackLength is { } stack) dims.Add($"stack {Numbers.Show(stack * 1000, 2)} mm");
         if (g.EffectiveMechanicalGap is { } gap) dims.Add($"gap {Numbers.Show(gap * 1000, 3)} mm");

@@ -71,16 +71,22 @@ public static class FieldPlot
         // ampere-conductors, towards the viewer) or a cross (negative), sized by magnitude.
         double largestCurrent = Math.Max(1e-12, slotCurrent.Select(Math.Abs).Max());
         double halfWidth = Math.PI / q * 0.55;
+        // The slots open onto the gap from the stator: outwards into the outer iron for an inner
+        // rotor, inwards into the inner iron when the rotor is outside.
+        bool outside = d.Geometry.RotorOutside;
+        double surface = outside ? RotorRadius : BoreRadius, depth = outside ? -SlotDepth : SlotDepth;
         for (int i = 0; i < q; i++)
         {
             double theta = SlotSpectrum.SlotAngle(i, q);
-            s.Add(new PathShape([At(BoreRadius, theta - halfWidth * 0.6), At(BoreRadius + SlotDepth, theta - halfWidth),
-                At(BoreRadius + SlotDepth, theta + halfWidth), At(BoreRadius, theta + halfWidth * 0.6)], true, new Stroke(Palette.IronEdge, 0.8), Palette.Paper));
-            double discRadius = Math.Min(unit * SlotDepth * 0.35, unit * (BoreRadius + SlotDepth / 2) * halfWidth * 0.8);
+            s.Add(new PathShape([At(surface, theta - halfWidth * 0.6), At(surface + depth, theta - halfWidth),
+                At(surface + depth, theta + halfWidth), At(surface, theta + halfWidth * 0.6)], true, new Stroke(Palette.IronEdge, 0.8), Palette.Paper));
+            double discRadius = Math.Min(unit * SlotDepth * 0.35, unit * (surface + depth / 2) * halfWidth * 0.8);
             double share = Math.Abs(slotCurrent[i]) / largestCurrent;
             if (share < 1e-9) continue;
-            CurrentSymbol(s, At(BoreRadius + SlotDepth / 2, theta), discRadius * (0.45 + 0.55 * share), slotCurrent[i] > 0);
+            CurrentSymbol(s, At(surface + depth / 2, theta), discRadius * (0.45 + 0.55 * share), slotCurrent[i] > 0);
         }
+        s.Text(cx, cy - 4, outside ? "stator (inside)" : "rotor", 11, Palette.Muted, Anchor.Middle);
+        s.Text(cx, cy + 12, outside ? "rotor outside" : "stator outside", 10, Palette.Muted, Anchor.Middle);
         int every = Math.Max(1, q / 12);
         for (int i = 0; i < q; i += every)
         {
@@ -115,10 +121,11 @@ public static class FieldPlot
         s.Text(kx, ky + 24, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 240, ky + 24, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? (exact is null ? "gap colour: radial B (T), thin gap" : "gap colour: radial B (T), 2-D at mid-gap") : "gap colour: MMF (A)", 10, Palette.Muted, Anchor.Middle);
-        CurrentSymbol(s, new Point(26, 60), 6, true);
-        s.Text(36, 64, "+", 10, Palette.Muted);
-        CurrentSymbol(s, new Point(56, 60), 6, false);
-        s.Text(66, 64, "− slot ampere-conductors (symbol size: magnitude)", 10, Palette.Muted);
+        CurrentSymbol(s, new Point(822, ky + 6), 6, true);
+        s.Text(832, ky + 10, "+", 10, Palette.Muted);
+        CurrentSymbol(s, new Point(856, ky + 6), 6, false);
+        s.Text(866, ky + 10, "−", 10, Palette.Muted);
+        s.Text(846, ky + 24, "slot current", 10, Palette.Muted, Anchor.Middle);
         return s;
     }
 

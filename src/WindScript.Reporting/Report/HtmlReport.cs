@@ -77,7 +77,7 @@ public static class HtmlReport
         Figure(o, "star", StarPlot.Draw(design), "Slot EMF phasors at their electrical angles (Bianchi and Dai Pre, 2006), coloured by the phase of the top-layer coil side; thick arrows are the phase resultants.");
         Figure(o, "mmf", MmfPlot.Draw(excitation, 0), $"F(θ) at t = 0 for {excitation.Name}: the staircase the slot currents make, and its working wave.");
         Figure(o, "spectrum", SpectrumPlot.Draw(excitation), "Winding factors (numeric, from the coil sides) and the MMF waves of the strongest current frequency; forward waves travel towards increasing slot number.");
-        Figure(o, "field", FieldPlot.Draw(excitation, gap, 0), "Radial flux density in the thin-gap model with Carter's coefficient, and flux lines for iron of uniform high permeability.");
+        Figure(o, "field", FieldPlot.Draw(excitation, gap, 0), "Radial flux density: the thin-gap staircase with Carter's coefficient and the exact 2-D field of the smooth gap at the rotor surface (the gap ring shows the 2-D field at mid-gap, on its own purple–green scale); flux lines for iron of uniform high permeability. The ideal model has no saturation and no rotor reaction.");
 
         Section(o, "diagnostics");
         Diagnostics(o, compilation);

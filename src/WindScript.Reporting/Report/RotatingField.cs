@@ -99,7 +99,7 @@ public static class RotatingField
     private static Scene Draw(WindingDesign design, Frame first, double yMax)
     {
         int q = design.Slots, p = design.PolePairs;
-        var s = new Scene(900, 400, $"Rotating field of {design.Name}");
+        var s = new Scene(900, 420, $"Rotating field of {design.Name}");
         // Ring: one wedge per slot interval, coloured by F; the working wave's crests as spokes.
         s.Add(new CircleShape(new Point(RingX, RingY), RingOuter + 6, new Stroke(Palette.IronEdge, 1), Palette.Iron));
         for (int i = 0; i < q; i++)
@@ -113,10 +113,17 @@ public static class RotatingField
         s.Add(new CircleShape(new Point(RingX, RingY), RingInner - 4, new Stroke(Palette.IronEdge, 1), Palette.Iron));
         s.Add(new PathShape(CrestSpokes(first.Fundamental, p), false, new Stroke(Palette.Fundamental, 3)) { Id = "ws-crest" });
         s.Text(RingX, RingY + RingOuter + 34, "F(θ) around the gap; spokes: crests of the working wave", 11, Palette.Muted, Anchor.Middle);
+        s.Text(RingX, RingY + RingOuter + 50, design.Geometry.RotorOutside ? "rotor outside (ring's outer edge), stator inside" : "stator outside (ring's outer edge), rotor inside", 10, Palette.Muted, Anchor.Middle);
+        // Key of the field colour scale (its own purple–green scale, not phase colours).
+        double kx = RingX - 120, ky = 22;
+        for (int k = 0; k < 40; k++) s.Rect(kx + k * 6, ky, 6.5, 10, Palette.Diverging(-1 + 2 * k / 39.0));
+        s.Text(kx, ky + 22, $"−{Ticks.Format(yMax)} A", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 240, ky + 22, $"+{Ticks.Format(yMax)} A", 10, Palette.Muted, Anchor.Middle);
+        s.Text(kx + 120, ky + 22, "ring colour: MMF F", 10, Palette.Muted, Anchor.Middle);
 
         // Developed F(θ) and its fundamental.
         var area = new ChartArea(ChartLeft, ChartTop, ChartWidth, ChartHeight, 0, 360, -yMax, yMax);
-        area.DrawAxes(s, "mechanical angle (degrees, counter-clockwise)", "MMF (A-turns)", Staircases.DegreeTicks, null, ChartArea.Degrees);
+        area.DrawAxes(s, "mechanical angle (degrees, counter-clockwise)", "MMF (A)", Staircases.DegreeTicks, null, ChartArea.Degrees);
         s.Add(new PathShape(Staircases.Points(area, first.Levels), false, new Stroke(Palette.Staircase, 1.8)) { Id = "ws-stair" });
         var fundamental = Staircases.Sample(theta => (first.Fundamental * Complex.FromPolarCoordinates(1, p * theta)).Real);
         s.Add(new PathShape([.. fundamental.Select(pt => area.At(pt.X, pt.Y))], false, new Stroke(Palette.Fundamental, 2, [7, 4])) { Id = "ws-fund" });

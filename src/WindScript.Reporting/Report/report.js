@@ -20,10 +20,10 @@
   function n(v) { return Math.round(v * 100) / 100; }
   function slotDeg(i) { return 360 * (i + 0.5) / q; }
 
-  // The diverging blue–white–vermillion scale of the static pictures (Okabe–Ito ends).
+  // The diverging purple–white–green field scale of the static pictures (Palette.Diverging; not phase colours).
   function diverging(v) {
     v = Math.max(-1, Math.min(1, v));
-    var end = v >= 0 ? [0xd5, 0x5e, 0x00] : [0x00, 0x72, 0xb2], t = 1 - Math.abs(v);
+    var end = v >= 0 ? [0x1b, 0x78, 0x37] : [0x76, 0x2a, 0x83], t = 1 - Math.abs(v);
     return 'rgb(' + end.map(function (c) { return Math.round(c + (255 - c) * t); }).join(',') + ')';
   }
 

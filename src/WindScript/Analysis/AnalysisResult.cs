@@ -87,13 +87,17 @@ public sealed record BalancedSpectrum(
 /// <summary>One order under balanced currents: forward and backward amplitudes relative to the working wave.</summary>
 public sealed record BalancedWave(int Order, double ElectricalOrder, double Forward, double Backward);
 
-/// <summary>Gap geometry used: Carter's coefficient and the radii (m); null where the geometry is missing.</summary>
+/// <summary>
+/// Gap geometry used: Carter's coefficient and the radii (m); null where the geometry is missing.
+/// BoreRadius is the stator's gap surface: the bore, or the stator's outer surface when the rotor is outside.
+/// </summary>
 public sealed record GapSummary(
     double? CarterCoefficient,
     double? Gap,
     double? EffectiveGap,
     double? BoreRadius,
-    double? RotorRadius);
+    double? RotorRadius,
+    bool RotorOutside = false);
 
 /// <summary>Back-EMF for the declared peak fundamental gap flux density.</summary>
 public sealed record BackEmfSummary(double PeakFluxDensity, double FluxPerPole, ImmutableArray<PhaseEmf> Phases);

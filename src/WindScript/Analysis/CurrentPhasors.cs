@@ -10,7 +10,7 @@ namespace WindScript.Analysis;
 /// </summary>
 internal sealed record CurrentPhasors(double Omega, ImmutableArray<Complex> Phasors)
 {
-    public double FrequencyHz => Omega / (2 * Math.PI);
+    public double FrequencyHz => Model.CurrentComponent.AsWritten(Omega / (2 * Math.PI));
 
     public bool IsDirect => Omega == 0;
 

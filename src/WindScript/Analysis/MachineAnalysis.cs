@@ -131,7 +131,7 @@ public static class MachineAnalysis
             else notes.Add("slot opening not narrower than the slot pitch: Carter's coefficient not computed");
         }
         else notes.Add("Carter's coefficient and field need bore diameter and gap");
-        return new GapSummary(carter, gap, carter is { } k && gap is { } d ? k * d : null, bore, rotor);
+        return new GapSummary(carter, gap, carter is { } k && gap is { } d ? k * d : null, bore, rotor, g.RotorOutside);
     }
 
     private static BackEmfSummary? BackEmfOf(WindingDesign design, ImmutableArray<PhaseAnalysis> phases, ImmutableArray<string>.Builder notes)

@@ -38,8 +38,11 @@ internal static class TravellingWaves
         double forward = f.Magnitude, backward = b.Magnitude, noise = 1e-12 * Math.Max(forward, backward);
         if (forward < noise) forward = 0;      // cancellation leaves rounding residue, not a wave
         if (backward < noise) backward = 0;
+        var kind = Classify(forward, backward);
+        // Signed by direction: a backward wave (or an elliptic one whose backward half is larger) moves at −ω/ν.
+        if (kind == WaveKind.Backward || (kind == WaveKind.Elliptic && backward > forward)) speed = -speed;
         return new TravellingWave(order, electrical, currents.FrequencyHz, forward, backward, 0,
-            speed, speed * 60 / (2 * Math.PI), Classify(forward, backward));
+            speed, Model.CurrentComponent.AsWritten(speed * 60 / (2 * Math.PI)), kind);
     }
 
     private static WaveKind Classify(double forward, double backward)
@@ -69,8 +72,10 @@ public enum WaveKind
 
 /// <summary>
 /// One MMF harmonic of a drive: mechanical order, electrical order ν/p, current frequency,
-/// forward and backward amplitudes (A-turns peak), the standing amplitude for DC, and the
-/// mechanical speed of the waves (forward at +speed, backward at −speed).
+/// forward and backward amplitudes (A, peak ampere-turns), the standing amplitude for DC, and the
+/// signed mechanical speed: positive for a forward wave (towards higher slot numbers), negative for
+/// a backward one; an elliptic wave takes the sign of its larger half, a pulsating wave (equal
+/// halves at ±speed) is given as +speed.
 /// </summary>
 public sealed record TravellingWave(
     int Order,

@@ -57,6 +57,7 @@ public static class WindEmitter
         Millimetres(PropertyName.Gap, g.Gap);
         Millimetres(PropertyName.SlotOpening, g.SlotOpening);
         Millimetres(PropertyName.RotorRadius, g.RotorRadius);
+        if (g.RotorOutside) Line(o, $"{Vocabulary.Word(PropertyName.Rotor)} outside");
         if (g.SkewSlots != 0) Line(o, $"{W(PropertyName.Skew)} {Number(g.SkewSlots)} slots");
         if (g.GapFluxDensity is { } b) Line(o, $"{W(PropertyName.GapFluxDensity)} {Number(b)} T");
         o.Append("}\n");

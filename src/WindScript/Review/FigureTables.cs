@@ -28,6 +28,7 @@ internal static class FigureTables
             Row("layers", a, b, d => d.Winding.Layers),
             Row("parallel paths", a, b, d => d.Winding.Paths),
             Row("coils", a, b, d => d.Winding.Coils.Length),
+            Row("rotor outside (1 = yes)", a, b, d => d.Geometry.RotorOutside ? 1 : 0),
             Row("bore diameter", a, b, d => Mm(d.Geometry.BoreDiameter), "mm"),
             Row("stack length", a, b, d => Mm(d.Geometry.StackLength), "mm"),
             Row("air gap", a, b, d => Mm(d.Geometry.Gap), "mm"),

@@ -112,6 +112,12 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case PropertyName.Gap: return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
             case PropertyName.SlotOpening: return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
             case PropertyName.RotorRadius: return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
+            case PropertyName.Rotor:
+                // `rotor outside` (hub and fan motors) or `rotor inside` (the default).
+                if (p.Value is NameExpressionSyntax { Name.Text: "outside" or "inside" } word)
+                    return (facts, g with { RotorOutside = word.Name.Text == "outside" });
+                diagnostics.Add(DiagnosticCatalog.RotorPositionUnknown, p.Value.Span, "'rotor' takes 'inside' or 'outside'");
+                return (facts, g);
             case PropertyName.GapFluxDensity:
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
             case PropertyName.PhaseShift:

@@ -8,7 +8,7 @@ internal enum BlockKind { Machine, Winding, Group, Drive }
 /// <summary>Every <c>keyword value</c> property. The words, owners and meanings are in <see cref="Vocabulary.Properties"/>.</summary>
 internal enum PropertyName
 {
-    Slots, Poles, Bore, Stack, Gap, SlotOpening, RotorRadius, Skew, PhaseShift, GapFluxDensity,
+    Slots, Poles, Bore, Stack, Gap, SlotOpening, RotorRadius, Rotor, Skew, PhaseShift, GapFluxDensity,
     Layers, Turns, Pitch, Paths, SeriesTurns, ConductorsPerSlot,
 }
 
@@ -25,6 +25,8 @@ internal enum ValueKind
     WholeNumber,
     /// <summary>A number with a unit of <see cref="PropertyWord.Dimension"/> (or <see cref="PropertyWord.AlsoAccepts"/>).</summary>
     Quantity,
+    /// <summary>One of the words in <see cref="PropertyWord.Words"/> (<c>rotor outside</c>).</summary>
+    Word,
 }
 
 /// <summary>A block word: its kind, whether it stands at the top of a file, and the other statements it takes besides its properties.</summary>
@@ -38,6 +40,9 @@ internal sealed record PropertyWord(PropertyName Name, string Word, IReadOnlyLis
 {
     /// <summary>A second dimension the value may have (skew: slot pitches or an angle).</summary>
     public Dimension? AlsoAccepts { get; init; }
+
+    /// <summary>The words a <see cref="ValueKind.Word"/> property takes (not reserved: they mean something only here).</summary>
+    public IReadOnlyList<string> Words { get; init; } = [];
 
     public bool In(BlockKind block) => Blocks.Contains(block);
 }

@@ -282,6 +282,27 @@ public class ThickGapFieldTests
         Assert.False(Inductances.Of(Designs.IntegralSlot(36, 4, 7, geometry: thinCore), WindingSpectrum.Of(Designs.IntegralSlot(36, 4, 7, geometry: thinCore)), 1)!.ThickGap);
     }
 
+    // An outer-rotor machine: the rotor's gap surface lies at bore/2 + gap, Carter's slot pitch is
+    // the stator's at the gap, and the 2-D field is the outer-rotor annulus (checked above by FD).
+    [Fact]
+    public void Outer_rotor_machine_uses_the_radii_outside_the_stator()
+    {
+        var geometry = new Geometry { BoreDiameter = 0.142, StackLength = 0.035, Gap = 0.0008, SlotOpening = 0.002, RotorOutside = true };
+        var drive = new Drive { Name = "d", Currents = [.. Enumerable.Range(0, 3).Select(k => new PhaseCurrent(k, [new CurrentComponent(25, 2 * Math.PI * 150, -k * 2 * Math.PI / 3)]))] };
+        var d = Designs.ToothCoils(12, 10, geometry: geometry, drives: [drive]);
+        var r = MachineAnalysis.Evaluate(d);
+        Assert.Equal(0.071 + 0.0008, r.Gap.RotorRadius!.Value, 12);
+        Assert.True(r.Gap.RotorOutside);
+        Assert.Equal(CarterCoefficient.Compute(Math.PI * 0.142 / 12, 0.002, 0.0008), r.Gap.CarterCoefficient!.Value, 12);
+        var b1 = r.Drives[0].FundamentalField!;
+        AssertRelative(AnnularGapField.AtRotor(b1.Mmf, 5, 0.071, 0.0718), b1.ExactFluxDensityAtRotor, 1e-12);
+        // Outside the stator the flux tube widens towards the rotor: B falls from stator to rotor.
+        Assert.True(b1.RadialFluxDensityAtBore > b1.RadialFluxDensityAtRotor);
+        Assert.True(b1.ExactFluxDensityAtBore > b1.ExactFluxDensityAtRotor);
+        Assert.NotNull(r.Inductances);
+        Assert.Equal((0.071 + 0.0718) / 2, r.Inductances!.MeanRadius, 12);
+    }
+
     private static void AssertRelative(double expected, double actual, double tolerance) =>
         Assert.True(Math.Abs(actual - expected) <= tolerance * Math.Abs(expected), $"expected {expected:R}, got {actual:R} (relative {Math.Abs(actual / expected - 1):E2})");
 }

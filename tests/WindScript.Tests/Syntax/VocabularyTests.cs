@@ -30,6 +30,7 @@ public class VocabularyTests
         foreach (var p in Vocabulary.Properties)
         {
             if (p.Value == ValueKind.WholeNumber) Assert.True(p.Dimension.IsNone, p.Word);
+            else if (p.Value == ValueKind.Word) Assert.True(p.Dimension.IsNone && p.Words.Count > 0, p.Word);
             else Assert.NotEmpty(Vocabulary.UnitsFor(p.Dimension));
         }
     }
@@ -49,7 +50,12 @@ public class VocabularyTests
     {
         var property = Vocabulary.Property(word)!;
         var block = Vocabulary.Block(blockWord)!;
-        string value = property.Value == ValueKind.WholeNumber ? "2" : $"1 {Vocabulary.UnitsFor(property.Dimension).First()}";
+        string value = property.Value switch
+        {
+            ValueKind.WholeNumber => "2",
+            ValueKind.Word => property.Words[0],
+            _ => $"1 {Vocabulary.UnitsFor(property.Dimension).First()}",
+        };
         string statement = $"{word} {value}";
         string text = block.Kind switch
         {

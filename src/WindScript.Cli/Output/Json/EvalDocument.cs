@@ -103,9 +103,10 @@ public sealed record GapJson(
     [property: JsonPropertyName("gap")] double? Gap,
     [property: JsonPropertyName("effectiveGap")] double? EffectiveGap,
     [property: JsonPropertyName("boreRadius")] double? BoreRadius,
-    [property: JsonPropertyName("rotorRadius")] double? RotorRadius)
+    [property: JsonPropertyName("rotorRadius")] double? RotorRadius,
+    [property: JsonPropertyName("rotorOutside")] bool RotorOutside)
 {
-    public static GapJson From(GapSummary g) => new(g.CarterCoefficient, g.Gap, g.EffectiveGap, g.BoreRadius, g.RotorRadius);
+    public static GapJson From(GapSummary g) => new(g.CarterCoefficient, g.Gap, g.EffectiveGap, g.BoreRadius, g.RotorRadius, g.RotorOutside);
 }
 
 /// <summary>Air-gap self and mutual inductances (H) and the synchronous inductance.</summary>
