@@ -12,7 +12,7 @@ namespace WindScript;
 /// </summary>
 public sealed class Compilation
 {
-    private Compilation(SyntaxTree syntax, Evaluator.Result semantics, IReadOnlyList<Diagnostic> diagnostics)
+    private Compilation(SyntaxTree syntax, SemanticBinder.Result semantics, IReadOnlyList<Diagnostic> diagnostics)
     {
         Syntax = syntax;
         Design = semantics.Design;
@@ -44,7 +44,7 @@ public sealed class Compilation
     {
         var syntax = SyntaxTree.Parse(source);
         // A refused file has nothing to evaluate: its one diagnostic says why.
-        var semantics = syntax.Refused ? new Evaluator.Result(null, new SemanticModel(), []) : Evaluator.Evaluate(syntax);
+        var semantics = syntax.Refused ? new SemanticBinder.Result(null, new SemanticModel(), []) : SemanticBinder.Bind(syntax);
         var all = new List<Diagnostic>(syntax.Diagnostics);
         all.AddRange(semantics.Diagnostics);
         if (semantics.Design is { } design)

@@ -239,7 +239,7 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
         {
             $"Q = {d.Slots} slots, 2p = {d.Poles} poles, m = {d.Phases.Length} phases ({string.Join(" ", d.Phases.Select(x => x.Name))})",
             $"slots per pole and phase q = {Numbers.Fraction(d.Slots, d.Poles * d.Phases.Length)}; pole pitch {Numbers.Fraction(d.Slots, d.Poles)} slots",
-            $"slot pitch {Numbers.Show(360.0 * p / d.Slots, 3)}° electrical; periodicity t = gcd(Q, p) = {d.Periodicity}; cogging order lcm(Q, 2p) = {WindingDesign.Lcm(d.Slots, d.Poles)}",
+            $"slot pitch {Numbers.Show(360.0 * p / d.Slots, 3)}° electrical; periodicity t = gcd(Q, p) = {d.Periodicity}; cogging order lcm(Q, 2p) = {WindScript.Numerics.IntegerMath.Lcm(d.Slots, d.Poles)}",
         };
         var g = d.Geometry;
         var dims = new List<string>();

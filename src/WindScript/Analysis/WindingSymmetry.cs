@@ -33,10 +33,10 @@ internal sealed record WindingSymmetry(int MachinePeriodicity, int WindingPeriod
         int period = q / periodicity;
         bool reversal = period % 2 == 0 && phases.Any(c => c.Any(x => x != 0)) && phases.All(c => ShiftEquals(c, period / 2, -1));
         return new WindingSymmetry(
-            (int)WindingDesign.Gcd(q, design.PolePairs),
+            (int)WindScript.Numerics.IntegerMath.Gcd(q, design.PolePairs),
             periodicity,
             reversal,
-            (int)WindingDesign.Lcm(q, design.Poles));
+            (int)WindScript.Numerics.IntegerMath.Lcm(q, design.Poles));
     }
 
     private static bool ShiftEquals(int[] c, int shift, int sign)

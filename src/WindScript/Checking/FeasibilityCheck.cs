@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using WindScript.Diagnostics;
 using WindScript.Synthesis;
 

@@ -8,7 +8,7 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor UndefinedName = new(
         "WS2001", Severity.Error, "Undefined name",
-        "A name is used that no 'let', loop or declaration above it defines. Names are visible below their definition, in the same block and the blocks nested in it. Check the spelling or add a 'let'.");
+        "A name is used that no 'let', loop or declaration defines. A block is read in passes, so its 'let' values are visible to every other statement of the block and of the blocks nested in it, wherever they stand; a 'let' itself may use only the values defined above it (so no value can depend on itself). Check the spelling or add a 'let'.");
 
     public static readonly DiagnosticDescriptor DuplicateName = new(
         "WS2002", Severity.Error, "Duplicate name",

@@ -48,7 +48,7 @@ public static class WindEmitter
         Line(o, $"{W(PropertyName.Slots)} {d.Slots}");
         Line(o, $"{W(PropertyName.Poles)} {d.Poles}");
         Line(o, $"{Vocabulary.PhasesWord} " + string.Join(" ", phases));
-        if (Math.Abs(d.PhaseShiftDegrees - Evaluator.DefaultPhaseShift(d.Phases.Length)) > 1e-12)
+        if (Math.Abs(d.PhaseShiftDegrees - PhaseShift.DefaultDegrees(d.Phases.Length)) > 1e-12)
             Line(o, $"{W(PropertyName.PhaseShift)} {Number(d.PhaseShiftDegrees)} deg");
         var g = d.Geometry;
         void Millimetres(PropertyName property, double? metres) { if (metres is { } v) Line(o, $"{W(property)} {Number(v * 1000)} mm"); }

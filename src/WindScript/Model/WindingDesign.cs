@@ -53,7 +53,7 @@ public sealed record WindingDesign
     public TextSpan PhasesSpan { get; init; }
 
     /// <summary>Machine periodicity t = gcd(Q, p).</summary>
-    public int Periodicity => (int)Gcd(Slots, PolePairs);
+    public int Periodicity => (int)Numerics.IntegerMath.Gcd(Slots, PolePairs);
 
     /// <summary>
     /// Signed conductors per phase, slot and layer, computed once per design instance and kept
@@ -83,13 +83,4 @@ public sealed record WindingDesign
     /// Σ|n| over the phase's sides / 2 / parallel paths.
     /// </summary>
     public double SeriesTurns(int phase) => Analysis.WindingSpectrum.Of(this).SeriesTurns(phase);
-
-    internal static long Gcd(long a, long b)
-    {
-        a = Math.Abs(a); b = Math.Abs(b);
-        while (b != 0) (a, b) = (b, a % b);
-        return a;
-    }
-
-    internal static long Lcm(long a, long b) => a == 0 || b == 0 ? 0 : Math.Abs(a / Gcd(a, b) * b);
 }

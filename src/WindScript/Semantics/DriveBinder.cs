@@ -56,7 +56,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     if (sequence.IsDefaultOrEmpty) sequence = order;
                     break;
                 default:
-                    BlockReader.ReportMisplaced(diagnostics, statement, "a drive block");
+                    BlockRules.ReportMisplaced(diagnostics, statement, "a drive block");
                     break;
             }
         }

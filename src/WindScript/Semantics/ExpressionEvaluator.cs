@@ -252,7 +252,7 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             return null;
         }
         long x = Math.Abs((long)a.Value), y = Math.Abs((long)b.Value);
-        long g = Model.WindingDesign.Gcd(x, y);
+        long g = WindScript.Numerics.IntegerMath.Gcd(x, y);
         if (f == "gcd") return Quantity.Plain(g);
         double lcm = g == 0 ? 0 : (double)(x / g) * y;
         if (lcm > exact)

@@ -32,33 +32,49 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
         var facts = new MachineFacts { Name = block.Name.Text, Span = block.Span, KeywordSpan = block.Keyword.Span };
         var seen = new Dictionary<string, PropertySyntax>();
         var geometry = new Geometry();
-        // Slots and poles first, wherever they stand: an angle in slots or in electrical degrees converts through them.
-        foreach (var statement in block.Body.OrderBy(s => s is PropertySyntax { Keyword.Text: "slots" or "poles" } ? 0 : 1))
+        // Read in passes, so that statement order never changes meaning: the values first (in
+        // source order among themselves), then the counts other properties depend on (skew in
+        // degrees needs the slot count), then everything else.
+        foreach (var let in block.Body.OfType<LetSyntax>())
+            LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+        foreach (var statement in block.Body)
         {
             switch (statement)
             {
-                case LetSyntax let:
-                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
-                    break;
                 case PhasesSyntax phases:
                     if (!facts.Phases.IsDefaultOrEmpty)
                     {
-                        diagnostics.Add(DiagnosticCatalog.RepeatedProperty, phases.Keyword.Span, "'phases' is already given in this block");
+                        diagnostics.Add(DiagnosticCatalog.RepeatedProperty, phases.Keyword.Span, $"'{Vocabulary.PhasesWord}' is already given in this block");
                         break;
                     }
                     facts = facts with { Phases = BindPhases(phases, scope), PhasesSpan = phases.Span };
                     break;
+                case PropertySyntax p when IsCount(p):
+                    if (!BlockRules.FirstTime(diagnostics, seen, p)) break;
+                    (facts, geometry) = BindProperty(p, scope, facts, geometry);
+                    break;
+            }
+        }
+        foreach (var statement in block.Body)
+        {
+            switch (statement)
+            {
+                case LetSyntax or PhasesSyntax:
+                case PropertySyntax p0 when IsCount(p0):
+                    break; // read above
                 case PropertySyntax p when p.Property.In(BlockKind.Machine):
-                    if (!BlockReader.FirstTime(diagnostics, seen, p)) break;
+                    if (!BlockRules.FirstTime(diagnostics, seen, p)) break;
                     (facts, geometry) = BindProperty(p, scope, facts, geometry);
                     break;
                 default:
-                    BlockReader.ReportMisplaced(diagnostics, statement, "a machine block");
+                    BlockRules.ReportMisplaced(diagnostics, statement, "a machine block");
                     break;
             }
         }
         return facts with { Geometry = geometry };
     }
+
+    private static bool IsCount(PropertySyntax p) => p.Property.Name is PropertyName.Slots or PropertyName.Poles;
 
     private ImmutableArray<Phase> BindPhases(PhasesSyntax phases, Scope scope)
     {

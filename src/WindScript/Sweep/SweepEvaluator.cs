@@ -67,8 +67,8 @@ internal sealed class SweepEvaluator
         record.Phases = m;
         record.Layers = _spec.Layers;
         record.Pitch = pitch;
-        record.Periodicity = (int)WindingDesign.Gcd(q, p);
-        record.CoggingOrder = (int)WindingDesign.Lcm(q, poles);
+        record.Periodicity = (int)WindScript.Numerics.IntegerMath.Gcd(q, p);
+        record.CoggingOrder = (int)WindScript.Numerics.IntegerMath.Lcm(q, poles);
         record.Sections = _layout.Sections();
         record.DifferentialLeakage = DifferentialLeakage.Compute(conductors, m, p, _belts.PhaseShiftDegrees * Math.PI / 180);
         MarkPresentOrders(q, p, m, _layout.PhaseStep, factors);
@@ -128,7 +128,7 @@ internal sealed class SweepEvaluator
             if (Present(v, q)) { lowest = v; break; }
         record.LowestOrder = lowest;
         bool even = false;
-        int evenPeriod = q / (int)WindingDesign.Gcd(2L * p, q);
+        int evenPeriod = q / (int)WindScript.Numerics.IntegerMath.Gcd(2L * p, q);
         for (int k = 1; k <= evenPeriod && !even; k++) even = Present((int)(2L * k * p % q), q);
         record.EvenHarmonics = even;
         bool adjacent = false;

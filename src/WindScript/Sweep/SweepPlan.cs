@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using WindScript.Synthesis;
 
 namespace WindScript.Sweep;

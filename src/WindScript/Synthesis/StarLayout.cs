@@ -24,7 +24,7 @@ internal sealed class StarLayout
     public int Layers { get; private set; }
     public int Pitch { get; private set; }
 
-    /// <summary>The slot shift that carries phase k onto phase k + 1 (see <see cref="Feasibility.PhaseStep"/>).</summary>
+    /// <summary>The slot shift that carries phase k onto phase k + 1 (see <see cref="Analysis.Feasibility.PhaseStep"/>).</summary>
     public int PhaseStep { get; internal set; } = -1;
 
     /// <summary>

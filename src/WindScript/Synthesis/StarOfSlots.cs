@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using WindScript.Model;
 
 namespace WindScript.Synthesis;
@@ -63,7 +64,7 @@ internal static class StarOfSlots
 
     private static bool LaySingle(int slots, int polePairs, PhaseBelts belts, int pitch, StarLayout layout)
     {
-        int g = (int)WindingDesign.Gcd(slots, pitch);
+        int g = (int)WindScript.Numerics.IntegerMath.Gcd(slots, pitch);
         if (slots / g % 2 != 0) return false;
         for (int s = 0; s < slots; s++)
         {
@@ -100,7 +101,7 @@ internal static class StarOfSlots
     {
         int first = Feasibility.PhaseStep(slots, polePairs, belts);
         if (first < 0) return -1;
-        int t = (int)WindingDesign.Gcd(slots, polePairs);
+        int t = (int)WindScript.Numerics.IntegerMath.Gcd(slots, polePairs);
         for (int i = 0; i < t; i++)
         {
             int delta = (first + i * (slots / t)) % slots;

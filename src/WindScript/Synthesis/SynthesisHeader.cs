@@ -25,7 +25,7 @@ public static class SynthesisHeader
             "a balanced winding laid out by the star of slots (N. Bianchi, M. Dai Pre,",
             "IEE Proc. Electr. Power Appl., 2006).",
             $"q = {FractionText.Of(q, poles * m)} slots per pole per phase; periodicity t = gcd(Q, p) = {d.Periodicity};",
-            $"cogging order lcm(Q, 2p) = {WindingDesign.Lcm(q, poles)}; fundamental winding factor {factors[d.PolePairs - 1].ToString("0.0000", inv)};",
+            $"cogging order lcm(Q, 2p) = {WindScript.Numerics.IntegerMath.Lcm(q, poles)}; fundamental winding factor {factors[d.PolePairs - 1].ToString("0.0000", inv)};",
             $"{result.Sections} identical section{(result.Sections == 1 ? "" : "s")}, so {paths}.",
             "An idealised analysis aid: verify by finite-element analysis and test before build.",
         ];

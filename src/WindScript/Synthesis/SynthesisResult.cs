@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using System.Collections.Immutable;
 using WindScript.Diagnostics;
 using WindScript.Model;

@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using System.Collections.Immutable;
 using WindScript.Diagnostics;
 using WindScript.Model;
@@ -132,7 +133,7 @@ public static class WindingSynthesizer
                 $"(y·p = {pitch * polePairs} is a multiple of Q = {slots}), so the EMFs of its sides cancel; the pole pitch is {FractionText.Of(slots, 2 * polePairs)} slots");
         var works = BalancedPitches(slots, polePairs, belts, layers);
         string reason = outcome == LayoutOutcome.OddCycle
-            ? $"stepping by {pitch} slots visits {slots / WindingDesign.Gcd(slots, pitch)} slots before it returns, an odd number, so go and return sides cannot alternate"
+            ? $"stepping by {pitch} slots visits {slots / WindScript.Numerics.IntegerMath.Gcd(slots, pitch)} slots before it returns, an odd number, so go and return sides cannot alternate"
             : $"the go sides that pitch selects do not form a balanced star";
         string list = works.Count == 0 ? "no pitch works" : "pitches that work: " + string.Join(", ", works.Take(12)) + (works.Count > 12 ? ", ..." : "");
         string what = layers == 1 ? "single-layer winding" : "winding";

@@ -8,7 +8,7 @@ internal static class FractionText
 {
     public static string Of(long numerator, long denominator)
     {
-        long g = Math.Max(1, WindingDesign.Gcd(numerator, denominator));
+        long g = Math.Max(1, WindScript.Numerics.IntegerMath.Gcd(numerator, denominator));
         long n = numerator / g, d = denominator / g;
         return d == 1 ? n.ToString(CultureInfo.InvariantCulture) : string.Create(CultureInfo.InvariantCulture, $"{n}/{d}");
     }

@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using System.Globalization;
 using System.Numerics;
 using System.Text;

@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using WindScript.Diagnostics;
 using WindScript.Model;
 using WindScript.Synthesis;
@@ -11,7 +12,7 @@ namespace WindScript.Tests.Synthesis;
 /// </summary>
 public class FeasibilityTests
 {
-    private static int Gcd(int a, int b) => (int)WindingDesign.Gcd(a, b);
+    private static int Gcd(int a, int b) => (int)WindScript.Numerics.IntegerMath.Gcd(a, b);
 
     [Fact]
     public void Double_layer_condition_is_the_papers_for_odd_phase_counts()

@@ -1,3 +1,4 @@
+using WindScript.Analysis;
 using FsCheck;
 using FsCheck.Fluent;
 using WindScript.Synthesis;

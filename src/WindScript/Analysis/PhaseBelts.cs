@@ -1,4 +1,4 @@
-namespace WindScript.Synthesis;
+namespace WindScript.Analysis;
 
 /// <summary>
 /// How the star of slots is cut into phase belts. Phase k's positive belt points at k·φ
@@ -71,16 +71,15 @@ internal sealed class PhaseBelts
     }
 
     /// <summary>
-    /// The belts for m phases at the default phase shift (360/m electrical, 90° for two phases;
-    /// see <c>Evaluator.DefaultPhaseShift</c>). Null for m &lt; 1.
+    /// The belts for m phases at the default phase shift (<see cref="Model.PhaseShift.DefaultTurnFraction"/>).
+    /// Null for m &lt; 1.
     /// </summary>
-    public static PhaseBelts? ForPhases(int phases) => phases switch
+    public static PhaseBelts? ForPhases(int phases)
     {
-        < 1 => null,
-        1 => Create(1, 0, 1),
-        2 => Create(2, 1, 4),
-        _ => Create(phases, 1, phases),
-    };
+        if (phases < 1) return null;
+        var (num, den) = Model.PhaseShift.DefaultTurnFraction(phases);
+        return Create(phases, num, den);
+    }
 
     /// <summary>
     /// Belts for m phases shifted by num/den of a turn, or null when their directions do not cut
@@ -89,7 +88,7 @@ internal sealed class PhaseBelts
     public static PhaseBelts? Create(int phases, int shiftNumerator, int shiftDenominator)
     {
         if (phases < 1 || shiftDenominator < 1 || shiftNumerator < 0) return null;
-        int g = (int)Model.WindingDesign.Gcd(shiftNumerator, shiftDenominator);
+        int g = (int)WindScript.Numerics.IntegerMath.Gcd(shiftNumerator, shiftDenominator);
         if (g > 1) { shiftNumerator /= g; shiftDenominator /= g; }
         // Directions in units of 1/(2·den) turn; positive belts first, so that for even m at 360/m
         // the negative belt of phase k (which coincides with the positive belt of k + m/2) gives way.

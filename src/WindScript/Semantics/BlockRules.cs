@@ -3,8 +3,8 @@ using WindScript.Syntax;
 
 namespace WindScript.Semantics;
 
-/// <summary>Shared by the block binders: reporting statements that a block does not take, and repeated properties.</summary>
-internal static class BlockReader
+/// <summary>What every block enforces, shared by the block binders: a statement stands only where it is allowed, a property is given once.</summary>
+internal static class BlockRules
 {
     public static void ReportMisplaced(DiagnosticBag diagnostics, StatementSyntax statement, string blockKind)
     {

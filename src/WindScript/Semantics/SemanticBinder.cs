@@ -7,15 +7,15 @@ using WindScript.Text;
 namespace WindScript.Semantics;
 
 /// <summary>
-/// The semantic pass: resolves names, checks units and evaluates expressions, loops and
-/// patterns into an immutable <see cref="WindingDesign"/>. It runs on whatever parsed, so a
-/// file with syntax errors still gets every other check.
+/// The semantic pass, a binder: resolves names, checks units and evaluates expressions, loops
+/// and patterns into an immutable <see cref="WindingDesign"/>, one block binder per block
+/// kind. It runs on whatever parsed, so a file with syntax errors still gets every other check.
 /// </summary>
-internal static class Evaluator
+internal static class SemanticBinder
 {
     public sealed record Result(WindingDesign? Design, SemanticModel Model, IReadOnlyList<Diagnostic> Diagnostics);
 
-    public static Result Evaluate(SyntaxTree tree)
+    public static Result Bind(SyntaxTree tree)
     {
         var diagnostics = new DiagnosticBag();
         var model = new SemanticModel();
@@ -45,7 +45,7 @@ internal static class Evaluator
                     driveBlocks.Add(b);
                     break;
                 default:
-                    BlockReader.ReportMisplaced(diagnostics, statement, "the top level of a file (put it in a machine, winding or drive block)");
+                    BlockRules.ReportMisplaced(diagnostics, statement, "the top level of a file (put it in a machine, winding or drive block)");
                     break;
             }
         }
@@ -71,7 +71,7 @@ internal static class Evaluator
         evaluator.Slots = machine.Slots ?? 0;
 
         int m = machine.Phases.IsDefault ? 0 : machine.Phases.Length;
-        double shift = machine.PhaseShiftDegrees ?? DefaultPhaseShift(m);
+        double shift = machine.PhaseShiftDegrees ?? PhaseShift.DefaultDegrees(m);
         if (machine.PhaseShiftDegrees is null && m >= 2)
             defaults.Add($"phase shift {shift:0.###} deg electrical between successive phases ({(m == 2 ? "90 deg for two phases" : "360/m")})");
 
@@ -129,14 +129,6 @@ internal static class Evaluator
         }
         return new Result(design, model, diagnostics.Items);
     }
-
-    /// <summary>360/m electrical degrees; two phases are taken in quadrature (90 deg).</summary>
-    public static double DefaultPhaseShift(int phases) => phases switch
-    {
-        <= 1 => 0,
-        2 => 90,
-        _ => 360.0 / phases,
-    };
 
     // A block left unclosed swallows the blocks after it; read those as top-level blocks again
     // so that a missing '}' is one diagnostic, not one per following block.

@@ -1,6 +1,6 @@
 using WindScript.Model;
 
-namespace WindScript.Synthesis;
+namespace WindScript.Analysis;
 
 /// <summary>
 /// Whether Q slots, 2p poles and m phases admit a balanced winding, by the star of slots
@@ -55,7 +55,7 @@ public static class Feasibility
     {
         long shift = (long)slots * belts.ShiftNumerator;
         if (shift % belts.ShiftDenominator != 0) return false;
-        long t = WindingDesign.Gcd(slots, polePairs);
+        long t = WindScript.Numerics.IntegerMath.Gcd(slots, polePairs);
         return shift / belts.ShiftDenominator % t == 0;
     }
 
@@ -83,10 +83,10 @@ public static class Feasibility
         {
             if (slots % 2 != 0)
                 return $"a single-layer winding has one coil side per slot and two per coil, so Q must be even (Q = {slots})";
-            long tStar = WindingDesign.Gcd(slots / 2, polePairs);
+            long tStar = WindScript.Numerics.IntegerMath.Gcd(slots / 2, polePairs);
             return $"{Quotient(slots, 2, belts, tStar, "t*")} must be a whole number, with t* = gcd(Q/2, p) = gcd({slots / 2}, {polePairs}) = {tStar}";
         }
-        long t = WindingDesign.Gcd(slots, polePairs);
+        long t = WindScript.Numerics.IntegerMath.Gcd(slots, polePairs);
         return $"{Quotient(slots, 1, belts, t, "t")} must be a whole number, with t = gcd(Q, p) = gcd({slots}, {polePairs}) = {t}";
     }
 
