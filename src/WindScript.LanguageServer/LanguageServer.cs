@@ -229,7 +229,7 @@ public sealed class LanguageServer
         }
         catch (Exception e)
         {
-            Log($"{method} failed: {e}");
+            Log($"{method} failed: {e.GetType().Name}: {e.Message}");
             TrySend(() => _writer.RespondError(id, RpcErrorCodes.InternalError, $"{method} failed: {e.GetType().Name}: {e.Message}"));
             return null;
         }
@@ -247,7 +247,7 @@ public sealed class LanguageServer
         }
         catch (Exception e)
         {
-            Log($"{method} failed: {(e is RpcException ? e.Message : e.ToString())}");
+            Log($"{method} failed: {(e is RpcException ? e.Message : $"{e.GetType().Name}: {e.Message}")}");
         }
         return null;
     }
@@ -317,7 +317,7 @@ public sealed class LanguageServer
             }
             catch (Exception e)
             {
-                Log(e is RpcException ? $"{uri}: {e.Message}" : $"checking {uri} failed: {e}");
+                Log(e is RpcException ? $"{uri}: {e.Message}" : $"checking {uri} failed: {e.GetType().Name}: {e.Message}");
                 notification = DiagnosticConverter.Failure(document, e);
             }
             document.PublishedVersion = document.Version;

@@ -15,7 +15,8 @@ public static class Positions
         if (line < 0) return 0;
         if (line >= source.LineCount) return source.Length;
         int start = source.LineStart(line);
-        return Math.Min(start + Math.Max(0, character), LineContentEnd(source, line));
+        // In long arithmetic: a character of 2^31 - 1 must mean the end of the line, not overflow.
+        return (int)Math.Min((long)start + Math.Max(0, character), LineContentEnd(source, line));
     }
 
     public static int ToOffset(SourceText source, JsonNode? position)
