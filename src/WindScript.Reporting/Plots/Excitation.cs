@@ -79,5 +79,5 @@ public sealed class Excitation
     }
 
     public static ImmutableArray<double> SlotCentresDegrees(int slots) =>
-        [.. Enumerable.Range(0, slots).Select(i => SlotSpectrum.SlotAngle(i, slots) * 180 / Math.PI)];
+        [.. Enumerable.Range(0, slots).Select(i => SlotFourier.SlotAngle(i, slots) * 180 / Math.PI)];
 }

@@ -57,8 +57,8 @@ public static class FieldPlot
         int segments = exact is null ? q : Math.Max(8 * q, 240);
         for (int i = 0; i < segments; i++)
         {
-            double from = exact is null ? SlotSpectrum.SlotAngle(i, q) : 2 * Math.PI * i / segments;
-            double to = exact is null ? SlotSpectrum.SlotAngle(i + 1, q) : 2 * Math.PI * (i + 1) / segments;
+            double from = exact is null ? SlotFourier.SlotAngle(i, q) : 2 * Math.PI * i / segments;
+            double to = exact is null ? SlotFourier.SlotAngle(i + 1, q) : 2 * Math.PI * (i + 1) / segments;
             double value = exact is null ? field[i] : exact.RadialAt(rMid, (from + to) / 2);
             var wedge = new List<Point>();
             for (int k = 0; k <= 6; k++) wedge.Add(At(BoreRadius, from + (to - from) * k / 6));
@@ -77,7 +77,7 @@ public static class FieldPlot
         double surface = outside ? RotorRadius : BoreRadius, depth = outside ? -SlotDepth : SlotDepth;
         for (int i = 0; i < q; i++)
         {
-            double theta = SlotSpectrum.SlotAngle(i, q);
+            double theta = SlotFourier.SlotAngle(i, q);
             s.Add(new PathShape([At(surface, theta - halfWidth * 0.6), At(surface + depth, theta - halfWidth),
                 At(surface + depth, theta + halfWidth), At(surface, theta + halfWidth * 0.6)], true, new Stroke(Palette.IronEdge, 0.8), Palette.Paper));
             double discRadius = Math.Min(unit * SlotDepth * 0.35, unit * (surface + depth / 2) * halfWidth * 0.8);
@@ -90,7 +90,7 @@ public static class FieldPlot
         int every = Math.Max(1, q / 12);
         for (int i = 0; i < q; i += every)
         {
-            var label = At(OuterRadius + 0.06, SlotSpectrum.SlotAngle(i, q));
+            var label = At(OuterRadius + 0.06, SlotFourier.SlotAngle(i, q));
             s.Label(label.X, label.Y, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), 9, Palette.Muted);
         }
 

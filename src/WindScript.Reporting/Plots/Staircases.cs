@@ -18,7 +18,7 @@ public static class Staircases
         var points = new List<Point>(2 * q + 2) { area.At(0, levels[q - 1]) };
         for (int i = 0; i < q; i++)
         {
-            double at = SlotSpectrum.SlotAngle(i, q) * 180 / Math.PI;
+            double at = SlotFourier.SlotAngle(i, q) * 180 / Math.PI;
             points.Add(area.At(at, levels[(i + q - 1) % q]));
             points.Add(area.At(at, levels[i]));
         }
@@ -37,7 +37,7 @@ public static class Staircases
         int every = Math.Max(1, (int)Math.Ceiling(22 / pitch));
         for (int i = 0; i < slots; i++)
         {
-            double x = area.X(SlotSpectrum.SlotAngle(i, slots) * 180 / Math.PI);
+            double x = area.X(SlotFourier.SlotAngle(i, slots) * 180 / Math.PI);
             s.Line(x, area.Bottom, x, area.Bottom - 5, new Stroke(Palette.Muted, 1));
             if (i % every == 0) s.Text(x, area.Bottom - 8, (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), 8, Palette.Muted, Anchor.Middle);
         }

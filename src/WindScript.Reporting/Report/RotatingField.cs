@@ -104,7 +104,7 @@ public static class RotatingField
         s.Add(new CircleShape(new Point(RingX, RingY), RingOuter + 6, new Stroke(Palette.IronEdge, 1), Palette.Iron));
         for (int i = 0; i < q; i++)
         {
-            double from = Analysis.SlotSpectrum.SlotAngle(i, q), to = Analysis.SlotSpectrum.SlotAngle(i + 1, q);
+            double from = Analysis.SlotFourier.SlotAngle(i, q), to = Analysis.SlotFourier.SlotAngle(i + 1, q);
             var wedge = new List<Point>();
             for (int k = 0; k <= 6; k++) wedge.Add(Ring(RingOuter, from + (to - from) * k / 6));
             for (int k = 6; k >= 0; k--) wedge.Add(Ring(RingInner, from + (to - from) * k / 6));

@@ -22,7 +22,7 @@ public sealed record AnalysisResult(
     WindingSummary Winding,
     ImmutableArray<PhaseAnalysis> Phases,
     double? DifferentialLeakage,
-    BalancedSpectrum Balanced,
+    BalancedMmfWaves Balanced,
     GapSummary Gap,
     InductanceMatrix? Inductances,
     BackEmfSummary? BackEmf,
@@ -77,7 +77,7 @@ public sealed record PhaseHarmonic(
 /// the working wave in A-turns and every other wave relative to it, with the orders that are
 /// sub-harmonics (ν &lt; p), even electrical harmonics, and inter-harmonics (fractional n &gt; 1).
 /// </summary>
-public sealed record BalancedSpectrum(
+public sealed record BalancedMmfWaves(
     double WorkingWave,
     ImmutableArray<BalancedWave> Waves,
     ImmutableArray<int> SubHarmonics,

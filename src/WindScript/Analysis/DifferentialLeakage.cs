@@ -48,7 +48,7 @@ public static class DifferentialLeakage
                 spaceRe[i] += levels[i] * cos;
                 spaceIm[i] += levels[i] * sin;
             }
-            var s = SlotSpectrum.Direct(phase, polePairs);
+            var s = SlotFourier.Direct(phase, polePairs);
             var turn = new Complex(cos, sin);
             plus += s * turn;                       // Σ S_k e^(+jkφ): forward working wave
             minus += s * Complex.Conjugate(turn);   // backward

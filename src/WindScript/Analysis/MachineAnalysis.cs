@@ -91,7 +91,7 @@ public static class MachineAnalysis
     /// The waves balanced unit currents make, orders 1..<paramref name="maxOrder"/> (mechanical),
     /// relative to the working wave, with the sub-, even and inter-harmonic orders among them.
     /// </summary>
-    internal static BalancedSpectrum BalancedWaves(WindingDesign design, WindingSpectrum winding, int maxOrder)
+    internal static BalancedMmfWaves BalancedWaves(WindingDesign design, WindingSpectrum winding, int maxOrder)
     {
         var unit = CurrentPhasors.Balanced(design.Phases.Length, design.PhaseShiftDegrees * Math.PI / 180);
         var (f, b) = TravellingWaves.At(winding, unit.Phasors.AsSpan(), design.PolePairs);
@@ -114,7 +114,7 @@ public static class MachineAnalysis
                 else if (order % p == 0 && order / p % 2 == 0) even.Add(order);
                 else if (order % p != 0) inter.Add(order);
             }
-        return new BalancedSpectrum(working, waves.ToImmutable(), sub.ToImmutable(), even.ToImmutable(), inter.ToImmutable());
+        return new BalancedMmfWaves(working, waves.ToImmutable(), sub.ToImmutable(), even.ToImmutable(), inter.ToImmutable());
     }
 
     private static GapSummary Gap(WindingDesign design, ImmutableArray<string>.Builder notes)

@@ -9,7 +9,7 @@ namespace WindScript.Analysis;
 /// <remarks>
 /// The mean is removed because flux leaving the rotor must return to it: with a uniform gap the
 /// magnetic potential of the rotor iron settles where the mean MMF across the gap is zero.
-/// Fourier form: N(θ) = Σ_ν Re(C_ν e^(jνθ)) with C_ν = S(ν) / (jπν), S from <see cref="SlotSpectrum"/>.
+/// Fourier form: N(θ) = Σ_ν Re(C_ν e^(jνθ)) with C_ν = S(ν) / (jπν), S from <see cref="SlotFourier"/>.
 /// </remarks>
 internal sealed class TurnsFunction
 {

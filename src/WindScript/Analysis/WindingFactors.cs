@@ -28,7 +28,7 @@ public static class WindingFactors
         int half = q / 2;
         int direct = Math.Min(factors.Length, half);
         for (int order = 1; order <= direct; order++)
-            factors[order - 1] = SlotSpectrum.Direct(slotConductors, order).Magnitude * inverse;
+            factors[order - 1] = SlotFourier.Direct(slotConductors, order).Magnitude * inverse;
         if (factors.Length > half)
         {
             int net = 0;
@@ -66,7 +66,7 @@ public static class WindingFactors
     /// its angle places the phase axis (see <see cref="AxisElectricalDegrees"/>).
     /// </summary>
     public static Complex Phasor(ReadOnlySpan<int> slotConductors, int sideTurns, int order) =>
-        sideTurns <= 0 ? Complex.Zero : SlotSpectrum.Direct(slotConductors, order) / sideTurns;
+        sideTurns <= 0 ? Complex.Zero : SlotFourier.Direct(slotConductors, order) / sideTurns;
 
     /// <summary>
     /// Electrical angle (degrees, −180..180] of the axis of a phase: where its turns function
@@ -75,7 +75,7 @@ public static class WindingFactors
     /// </summary>
     public static double AxisElectricalDegrees(ReadOnlySpan<int> slotConductors, int polePairs)
     {
-        var s = SlotSpectrum.Direct(slotConductors, polePairs);
+        var s = SlotFourier.Direct(slotConductors, polePairs);
         double degrees = (90 - s.Phase * 180 / Math.PI) % 360;
         if (degrees <= -180) degrees += 360;
         if (degrees > 180) degrees -= 360;

@@ -5,7 +5,7 @@ using WindScript.Model;
 namespace WindScript.Analysis;
 
 /// <summary>
-/// The slot spectra of every phase of a design (base band only, see <see cref="SlotSpectrum"/>),
+/// The slot spectra of every phase of a design (base band only, see <see cref="SlotFourier"/>),
 /// read at any mechanical order. Computed once per design instance and shared by the checker,
 /// the analysis, the plots and the report: <see cref="Of"/> remembers it beside the design
 /// without making the design mutable. Conductors are divided by the parallel paths, so a phase
@@ -24,7 +24,7 @@ internal sealed class WindingSpectrum
         PolePairs = polePairs;
         Paths = paths;
         _baseBands = baseBands;
-        _band = SlotSpectrum.BaseBandLength(slots);
+        _band = SlotFourier.BaseBandLength(slots);
         _sideTurns = sideTurns;
         SlotConductors = conductors;
     }
@@ -51,7 +51,7 @@ internal sealed class WindingSpectrum
         ComputationsOnThisThread++;
         int q = design.Slots, m = design.Phases.Length;
         double paths = Math.Max(1, design.Winding.Paths);
-        int band = SlotSpectrum.BaseBandLength(q);
+        int band = SlotFourier.BaseBandLength(q);
         var baseBands = new Complex[m * band];
         var sideTurns = new int[m];
         var conductors = new int[m][];
@@ -65,8 +65,8 @@ internal sealed class WindingSpectrum
         }
         // Phases in pairs: one transform serves two real distributions.
         for (int k = 0; k + 1 < m; k += 2)
-            SlotSpectrum.ComputeBaseBands(scaled[k], scaled[k + 1], baseBands.AsSpan(k * band, band), baseBands.AsSpan((k + 1) * band, band));
-        if (m % 2 == 1) SlotSpectrum.ComputeBaseBand(scaled[m - 1], baseBands.AsSpan((m - 1) * band, band));
+            SlotFourier.ComputeBaseBands(scaled[k], scaled[k + 1], baseBands.AsSpan(k * band, band), baseBands.AsSpan((k + 1) * band, band));
+        if (m % 2 == 1) SlotFourier.ComputeBaseBand(scaled[m - 1], baseBands.AsSpan((m - 1) * band, band));
         return new WindingSpectrum(q, m, design.PolePairs, paths, baseBands, sideTurns, conductors);
     }
 
@@ -75,7 +75,7 @@ internal sealed class WindingSpectrum
 
     /// <summary>S_k(ν) of the phase's conductors per path.</summary>
     public Complex SlotSum(int phase, int order) =>
-        SlotSpectrum.FromBaseBand(_baseBands.AsSpan(phase * _band, _band), Slots, order);
+        SlotFourier.FromBaseBand(_baseBands.AsSpan(phase * _band, _band), Slots, order);
 
     /// <summary>C_k(ν) = S_k(ν)/(jπν): the phase's turns function is Σ_ν Re(C_k(ν) e^(jνθ)).</summary>
     public Complex TurnsCoefficient(int phase, int order) =>

@@ -11,20 +11,20 @@ internal static class HarmonicContentChecks
         var d = c.Design;
         if (c.PhaseCount < 2) return;
         int p = d.PolePairs;
-        // The same balanced spectrum eval reports, to twice the slot count: that covers every
+        // The same balanced waves eval reports, to twice the slot count: that covers every
         // sub-harmonic and every even order within the first slot-harmonic period.
-        var spectrum = MachineAnalysis.BalancedWaves(d, c.Spectrum, 2 * d.Slots);
-        if (spectrum.WorkingWave <= 0) return;
+        var balanced = MachineAnalysis.BalancedWaves(d, c.Spectrum, 2 * d.Slots);
+        if (balanced.WorkingWave <= 0) return;
         var at = PhaseBalanceChecks.WindingKeyword(c);
-        var waves = spectrum.Waves.ToDictionary(w => w.Order);
+        var waves = balanced.Waves.ToDictionary(w => w.Order);
         double Relative(int order) => Math.Max(waves[order].Forward, waves[order].Backward);
 
-        var subs = spectrum.SubHarmonics;
+        var subs = balanced.SubHarmonics;
         if (subs.Length > 0)
             c.Diagnostics.Add(DiagnosticCatalog.SubHarmonics, at,
                 $"balanced currents produce sub-harmonic waves of order {string.Join(", ", subs.Take(4))} (working order p = {p}), the largest {subs.Max(Relative):P0} of the working wave");
 
-        var evens = spectrum.EvenHarmonics;
+        var evens = balanced.EvenHarmonics;
         if (evens.Length > 0)
             c.Diagnostics.Add(DiagnosticCatalog.EvenHarmonics, at,
                 $"balanced currents produce even electrical harmonics (electrical order {string.Join(", ", evens.Take(4).Select(v => v / p))})");

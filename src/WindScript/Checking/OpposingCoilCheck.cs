@@ -21,11 +21,11 @@ internal static class OpposingCoilCheck
         int p = d.PolePairs;
         // e^(−jpθ) of every slot centre, once: a coil's phasor is then two look-ups.
         var unit = new Complex[d.Slots];
-        for (int s = 0; s < d.Slots; s++) unit[s] = Complex.FromPolarCoordinates(1, -p * SlotSpectrum.SlotAngle(s, d.Slots));
+        for (int s = 0; s < d.Slots; s++) unit[s] = Complex.FromPolarCoordinates(1, -p * SlotFourier.SlotAngle(s, d.Slots));
         var found = new List<(Model.Coil Coil, Diagnostic Diagnostic, CodeFix? Fix)>();
         for (int k = 0; k < c.PhaseCount; k++)
         {
-            var total = SlotSpectrum.Direct(c.Spectrum.SlotConductors[k], p);
+            var total = SlotFourier.Direct(c.Spectrum.SlotConductors[k], p);
             if (total.Magnitude < 1e-9) continue;
             foreach (var coil in d.Winding.Coils)
             {

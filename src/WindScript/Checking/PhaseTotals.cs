@@ -19,7 +19,7 @@ internal sealed class PhaseTotals
         Phases = design.Phases.Length;
         PhaseShiftDegrees = design.PhaseShiftDegrees;
         _unit = new Complex[design.Slots];
-        for (int s = 0; s < design.Slots; s++) _unit[s] = Complex.FromPolarCoordinates(1, -design.PolePairs * SlotSpectrum.SlotAngle(s, design.Slots));
+        for (int s = 0; s < design.Slots; s++) _unit[s] = Complex.FromPolarCoordinates(1, -design.PolePairs * SlotFourier.SlotAngle(s, design.Slots));
         Turns = new long[Phases];
         Phasors = new Complex[Phases];
         foreach (var coil in design.Winding.Coils)

@@ -7,7 +7,7 @@ namespace WindScript.Sweep;
 /// <summary>
 /// Lays out and evaluates swept layouts, reusing its buffers (one evaluator per thread). The
 /// figures are those of the analysis model: winding factors from the coils
-/// (<see cref="CoilStarSpectrum"/>, equal to <see cref="Analysis.WindingFactors"/> to rounding),
+/// (<see cref="CoilStarFactors"/>, equal to <see cref="Analysis.WindingFactors"/> to rounding),
 /// differential leakage exact over all orders (<see cref="Analysis.DifferentialLeakage"/>).
 /// </summary>
 /// <remarks>
@@ -24,7 +24,7 @@ internal sealed class SweepEvaluator
     private readonly Dictionary<int, PhaseBelts> _beltsByPhases;
     private PhaseBelts _belts;
     private readonly StarLayout _layout;
-    private readonly CoilStarSpectrum _spectrum;
+    private readonly CoilStarFactors _spectrum;
     private int[] _conductors;
     private double[] _factors;
     private bool[] _present;
@@ -38,7 +38,7 @@ internal sealed class SweepEvaluator
         // Sized once for the largest slot count, so that memory stays flat along the sweep.
         int q = spec.SlotsTo;
         _layout = new StarLayout(q);
-        _spectrum = new CoilStarSpectrum(q);
+        _spectrum = new CoilStarFactors(q);
         _conductors = new int[spec.PhaseList[^1] * q];
         _factors = new double[q / 2 + 1];
         _present = new bool[q / 2 + 1];

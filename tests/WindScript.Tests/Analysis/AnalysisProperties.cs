@@ -36,7 +36,7 @@ public class AnalysisProperties
         for (int order = 1; order <= f.Length; order++)
         {
             Complex sum = 0;
-            for (int s = 0; s < d.Slots; s++) sum += c[s] * Complex.Exp(new Complex(0, -order * SlotSpectrum.SlotAngle(s, d.Slots)));
+            for (int s = 0; s < d.Slots; s++) sum += c[s] * Complex.Exp(new Complex(0, -order * SlotFourier.SlotAngle(s, d.Slots)));
             double expected = sides == 0 ? 0 : sum.Magnitude / sides;
             if (Math.Abs(expected - f[order - 1]) > 1e-10) return false;
         }

@@ -59,7 +59,7 @@ public class InductanceTests
             double total = 0;
             for (int i = 0; i < 36; i++)   // integrate interval by interval: the staircase is smooth inside each
             {
-                double from = SlotSpectrum.SlotAngle(i, 36), to = from + 2 * Math.PI / 36;
+                double from = SlotFourier.SlotAngle(i, 36), to = from + 2 * Math.PI / 36;
                 total += Integrate.OnClosedInterval(t => turns.ValueAt(from + 1e-12 + (t - from) * (1 - 1e-11)) * b * Math.Cos(2 * t - alpha), from, to);
             }
             return total * r * length;

@@ -106,7 +106,7 @@ public class WindingFactorTests
         for (int order = 1; order <= 400; order++)
         {
             System.Numerics.Complex sum = 0;
-            for (int s = 0; s < 9; s++) sum += c[s] * System.Numerics.Complex.Exp(new System.Numerics.Complex(0, -order * SlotSpectrum.SlotAngle(s, 9)));
+            for (int s = 0; s < 9; s++) sum += c[s] * System.Numerics.Complex.Exp(new System.Numerics.Complex(0, -order * SlotFourier.SlotAngle(s, 9)));
             Assert.Equal(sum.Magnitude / sides, f[order - 1], 12);
         }
     }

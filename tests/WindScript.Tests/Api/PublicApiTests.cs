@@ -54,7 +54,7 @@ public class PublicApiTests
     [InlineData("WindScript.Syntax.Parser")]
     [InlineData("WindScript.Syntax.Lexer")]
     [InlineData("WindScript.Checking.Checker")]
-    [InlineData("WindScript.Analysis.SlotSpectrum")]
+    [InlineData("WindScript.Analysis.SlotFourier")]
     [InlineData("WindScript.Diagnostics.DiagnosticBag")]
     public void Machinery_is_internal(string type) => Assert.DoesNotContain(type, PublicTypes());
 }

@@ -93,7 +93,7 @@ public sealed record BalancedJson(
     [property: JsonPropertyName("evenHarmonics")] IReadOnlyList<int> EvenHarmonics,
     [property: JsonPropertyName("interHarmonics")] IReadOnlyList<int> InterHarmonics)
 {
-    public static BalancedJson From(BalancedSpectrum b) => new(
+    public static BalancedJson From(BalancedMmfWaves b) => new(
         b.WorkingWave, [.. b.Waves.Select(BalancedWaveJson.From)], b.SubHarmonics, b.EvenHarmonics, b.InterHarmonics);
 }
 

@@ -11,7 +11,7 @@ namespace WindScript.Sweep;
 /// to rounding, at a third of the work and with no dependency chain; tests hold them together.
 /// </summary>
 /// <remarks>Orders beyond Q/2 repeat: k_w(ν) = k_w(ν mod Q) mirrored at Q/2, and 0 at multiples of Q.</remarks>
-internal sealed class CoilStarSpectrum(int slotCapacity)
+internal sealed class CoilStarFactors(int slotCapacity)
 {
     private int _slots = -1;
     private double[] _cos = [], _sin = [], _sinHalf = [];

@@ -3,7 +3,7 @@ using WindScript.Analysis;
 namespace WindScript.Tests.Analysis;
 
 /// <summary>The FFT path of the slot spectrum (large Q) agrees with the direct sum (independent computation).</summary>
-public class SlotSpectrumFftTests
+public class SlotFourierFftTests
 {
     [Theory]
     [InlineData(97)]
@@ -13,12 +13,12 @@ public class SlotSpectrumFftTests
     {
         var rng = new Random(slots);
         var values = Enumerable.Range(0, slots).Select(_ => (double)rng.Next(-20, 21)).ToArray();
-        var band = new System.Numerics.Complex[SlotSpectrum.BaseBandLength(slots)];
-        SlotSpectrum.ComputeBaseBand(values, band);
-        Assert.True(slots > SlotSpectrum.FftThreshold);
+        var band = new System.Numerics.Complex[SlotFourier.BaseBandLength(slots)];
+        SlotFourier.ComputeBaseBand(values, band);
+        Assert.True(slots > SlotFourier.FftThreshold);
         for (int order = 0; order < band.Length; order += Math.Max(1, band.Length / 50))
         {
-            var direct = SlotSpectrum.Direct(values, order);
+            var direct = SlotFourier.Direct(values, order);
             Assert.True((band[order] - direct).Magnitude < 1e-9 * Math.Max(1, direct.Magnitude) * slots, $"order {order}: {band[order]} vs {direct}");
         }
     }
@@ -34,14 +34,14 @@ public class SlotSpectrumFftTests
         var rng = new Random(slots + 1);
         var a = Enumerable.Range(0, slots).Select(_ => (double)rng.Next(-20, 21)).ToArray();
         var b = Enumerable.Range(0, slots).Select(_ => (double)rng.Next(-20, 21)).ToArray();
-        int length = SlotSpectrum.BaseBandLength(slots);
+        int length = SlotFourier.BaseBandLength(slots);
         var bandA = new System.Numerics.Complex[length];
         var bandB = new System.Numerics.Complex[length];
-        SlotSpectrum.ComputeBaseBands(a, b, bandA, bandB);
+        SlotFourier.ComputeBaseBands(a, b, bandA, bandB);
         for (int order = 0; order < length; order += Math.Max(1, length / 40))
         {
-            var da = SlotSpectrum.Direct(a, order);
-            var db = SlotSpectrum.Direct(b, order);
+            var da = SlotFourier.Direct(a, order);
+            var db = SlotFourier.Direct(b, order);
             Assert.True((bandA[order] - da).Magnitude < 1e-9 * Math.Max(1, da.Magnitude) * slots, $"a, order {order}: {bandA[order]} vs {da}");
             Assert.True((bandB[order] - db).Magnitude < 1e-9 * Math.Max(1, db.Magnitude) * slots, $"b, order {order}: {bandB[order]} vs {db}");
         }

@@ -16,7 +16,7 @@ namespace WindScript.Analysis;
 /// "base band") therefore fix every order: long spectra cost a table look-up per order, and
 /// sums over all orders can be done exactly in the slot domain.
 /// </remarks>
-internal static class SlotSpectrum
+internal static class SlotFourier
 {
     /// <summary>Number of orders in the base band, ⌊Q/2⌋ + 1 (orders 0..⌊Q/2⌋).</summary>
     public static int BaseBandLength(int slots) => slots / 2 + 1;
