@@ -1,6 +1,7 @@
 using WindScript.Cli.Files;
 using System.CommandLine;
 using System.Globalization;
+using WindScript.Reporting.Plots;
 using WindScript.Analysis;
 using WindScript.Cli.Output;
 using WindScript.Diagnostics;
@@ -22,22 +23,24 @@ public static class EvalCommand
         UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
         var at = new Option<string>("--at")
         {
-            Description = "Instant for the MMF and field: seconds, or with a unit (s, ms, us), e.g. 2.5ms",
+            Description = "Instant for the MMF and field, as plot --at takes it: seconds, or with a unit (2.5 ms, 250 us, or 90 deg of the first drive's period)",
             DefaultValueFactory = _ => "0",
         };
         at.Validators.Add(r =>
         {
-            if (ParseTime(r.GetValueOrDefault<string>()) is null) r.AddError($"--at: '{r.GetValueOrDefault<string>()}' is not a time within ±1e6 s (e.g. 0, 0.004, 2.5ms)");
+            // An angle needs the file's drive (its period) and is read in Run; anything else is checked here.
+            string text = r.GetValueOrDefault<string>() ?? "";
+            if (!TimeValue.TryParse(text, 1, out _, out string error)) r.AddError($"--at: {error}");
         });
         var command = new Command("eval", "Evaluate a winding: winding factors, MMF harmonics and rotating waves, air-gap field, leakage, inductances")
         {
             file, format, orders, at,
         };
-        command.SetAction(parse => Run(io, parse.GetValue(file)!, parse.GetValue(format)!, parse.GetValue(orders), ParseTime(parse.GetValue(at)!) ?? 0));
+        command.SetAction(parse => Run(io, parse.GetValue(file)!, parse.GetValue(format)!, parse.GetValue(orders), parse.GetValue(at)!));
         return command;
     }
 
-    public static int Run(CliIO io, string path, string format = "text", int orders = 25, double time = 0)
+    public static int Run(CliIO io, string path, string format = "text", int orders = 25, string at = "0")
     {
         if (InputFile.Read(path, io.In, io.Err) is not { } input) return ExitCodes.Usage;
         var compilation = Compilation.Compile(input.Text, input.Path);
@@ -62,6 +65,12 @@ public static class EvalCommand
             io.Err.WriteLine($"windscript eval: --orders {orders} at {design.Poles} poles asks for {(long)orders * design.PolePairs:N0} mechanical orders, more than the limit of {InputLimits.MaxMechanicalOrders:N0} (--orders {Math.Max(1, InputLimits.MaxMechanicalOrders / design.PolePairs)} at most for this file)");
             return ExitCodes.Usage;
         }
+        // The same reading of --at as plot's: an angle is taken within the first drive's period.
+        if (!TimeValue.TryParse(at, Excitation.Resolve(design, null)?.PeriodSeconds, out double time, out string atError))
+        {
+            io.Err.WriteLine($"windscript eval: --at: {atError}");
+            return ExitCodes.Usage;
+        }
         var result = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = orders, Time = time });
         switch (format)
         {
@@ -78,21 +87,5 @@ public static class EvalCommand
                 break;
         }
         return compilation.Diagnostics.Any(d => d.Severity == Severity.Error) ? ExitCodes.Findings : ExitCodes.Ok;
-    }
-
-    /// <summary>The largest |--at| accepted, in seconds.</summary>
-    public const double MaxTimeSeconds = 1e6;
-
-    /// <summary>A time in seconds from "0.004", "4ms", "2.5 ms", "250us" or "1s"; null if it is not one.</summary>
-    public static double? ParseTime(string? text)
-    {
-        if (string.IsNullOrWhiteSpace(text)) return null;
-        text = text.Trim();
-        (string Suffix, double Scale)[] units = [("ms", 1e-3), ("us", 1e-6), ("s", 1)];
-        double scale = 1;
-        foreach (var (suffix, factor) in units)
-            if (text.EndsWith(suffix, StringComparison.OrdinalIgnoreCase)) { text = text[..^suffix.Length].TrimEnd(); scale = factor; break; }
-        // Beyond a million seconds the phase angle w*t has no digits left (and overflows at 1e308).
-        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && Math.Abs(v * scale) <= MaxTimeSeconds ? v * scale : null;
     }
 }

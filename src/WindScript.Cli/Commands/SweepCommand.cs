@@ -32,7 +32,7 @@ public static class SweepCommand
             Description = "Pitch rule: pole (longest not exceeding the pole pitch), pole-K (shortened by K), all (1 to the pole pitch), or N slots",
             DefaultValueFactory = _ => "pole",
         };
-        var orders = new Option<int>("--orders", "-N") { Description = "Winding factors at electrical orders 1..N", DefaultValueFactory = _ => 49 };
+        var orders = new Option<int>("--orders") { Description = "Winding factors at electrical orders 1..N (as eval --orders; no short form, so it cannot be mistaken for synth -n, turns)", DefaultValueFactory = _ => 49 };
         var format = CommonOptions.Format("jsonl", "jsonl", "csv", "parquet");
         format.Description += " (parquet needs --output)";
         var shard = new Option<string?>("--shard")

@@ -38,7 +38,7 @@ public static class EvalAnalysisText
         Row(o, "regular winding", r.Winding.Regular is { } reg
             ? $"q = {reg.SlotsPerPolePerPhase}, coil pitch {reg.CoilPitch} slots: closed-form k_d, k_p shown"
             : "no (factors from the coil sides only)");
-        Row(o, "differential leakage", r.DifferentialLeakage is { } s ? $"{F(s, 5)} (exact, all orders)" : "undefined (no working wave)");
+        Row(o, "differential leakage", r.DifferentialLeakage is { } s ? $"{F(s, 5)} (coefficient, exact, all orders)" : "undefined (no working wave)");
         Row(o, "sub-harmonics", Orders(r.Balanced.SubHarmonics));
         Row(o, "even harmonics", Orders(r.Balanced.EvenHarmonics));
         Row(o, "inter-harmonics", Orders(r.Balanced.InterHarmonics));
@@ -58,8 +58,8 @@ public static class EvalAnalysisText
         foreach (var phase in same ? [r.Phases[0]] : r.Phases.AsEnumerable())
         {
             o.WriteLine();
-            o.WriteLine(same ? "winding factors (every phase)" : $"winding factors (phase {phase.Name})");
-            o.WriteLine($"  {"v",5} {"n",8} {"k_w",8} {"k_d",8} {"k_p",8} {"k_skew",8} {"MMF A/A",10}");
+            o.WriteLine(same ? "winding factors (every phase); MMF/phase: one phase's wave amplitude per ampere of its current (A/A, peak)" : $"winding factors (phase {phase.Name}); MMF/phase: the phase's wave amplitude per ampere (A/A, peak)");
+            o.WriteLine($"  {"v",5} {"n",8} {"k_w",8} {"k_d",8} {"k_p",8} {"k_skew",8} {"MMF/phase",10}");
             foreach (var h in phase.Harmonics)
                 o.WriteLine($"  {N(h.Order),5} {F(h.ElectricalOrder, 3),8} {F(h.WindingFactor, 4),8} {Opt(h.DistributionFactor),8} {Opt(h.PitchFactor),8} {F(h.SkewFactor, 4),8} {G(h.MmfPerAmpere),10}");
         }
@@ -118,7 +118,14 @@ public static class EvalAnalysisText
             Row(o, "B1, flux tube", $"rotor {G(b1.RadialFluxDensityAtRotor)} T ({Pct(b1.FluxTubeDeviationAtRotor)} vs 2-D), bore {G(b1.RadialFluxDensityAtBore)} T ({Pct(b1.FluxTubeDeviationAtBore)} vs 2-D)");
         }
         if (d.BackEmfFrequencyHz is { } hz)
-            Row(o, $"back-EMF at {G(hz)} Hz", string.Join("  ", r.Phases.Select(p => $"{p.Name} {G(d.BackEmfRms[p.Index])} V rms")));
+        {
+            // A machine constant (V per Hz of the declared B1) times this drive's frequency: the EMF a
+            // rotor field would induce, not something this drive's currents produce.
+            bool positiveSequence = d.Harmonics.Any(w => w.Order == r.Machine.PolePairs && w.FrequencyHz == hz && w.Kind == WaveKind.Forward);
+            string label = positiveSequence ? $"back-EMF at {G(hz)} Hz" : $"EMF constant x {G(hz)} Hz";
+            Row(o, label, string.Join("  ", r.Phases.Select(p => $"{p.Name} {G(d.BackEmfRms[p.Index])} V rms")) +
+                (positiveSequence ? "" : " (machine constant times frequency: this drive is not a positive-sequence supply)"));
+        }
         o.WriteLine($"  {"v",5} {"n",8} {"f Hz",8} {"forward A",11} {"backward A",11} {"standing A",11} {"speed rpm",10}  kind (+ speed: towards higher slot numbers)");
         foreach (var w in d.Harmonics)
             o.WriteLine($"  {N(w.Order),5} {F(w.ElectricalOrder, 3),8} {G(w.FrequencyHz),8} {G(w.Forward),11} {G(w.Backward),11} {G(w.Standing),11} {Speed(w),10}  {w.Kind.ToString().ToLowerInvariant()}");

@@ -309,6 +309,13 @@ public sealed record HoverContent(TextSpan Span, string Title, IReadOnlyList<str
             lines.Add($"rotating field at {Numbers.Show(omega / (2 * Math.PI), 3)} Hz: ω/p = {Numbers.Show(mech, 2)} rad/s = {Numbers.Show(mech * 60 / (2 * Math.PI), 2)} rpm mechanical (p = {p})");
         }
         if (omegas.Length == 0 && drive.Currents.Any(x => !x.Components.IsEmpty)) lines.Add("direct current only: a standing field (speed 0)");
+        // The gap field at t = 0, with the caution eval and the report give beside it.
+        var evaluated = Analysis.MachineAnalysis.Evaluate(d, new Analysis.AnalysisOptions { MaxElectricalOrder = 1 }).Drives.FirstOrDefault(x => x.Name == drive.Name);
+        if (evaluated?.PeakField is { } f)
+        {
+            lines.Add($"peak gap field at t = 0: {Numbers.Show(f.FluxDensity, 3)} T thin gap (Carter), 2-D {Numbers.Show(f.ExactFluxDensityAtRotor, 3)} T at the rotor");
+            if (Analysis.FieldCaution.For(f) is { } caution) lines.Add("caution: " + caution);
+        }
         return lines;
     }
 

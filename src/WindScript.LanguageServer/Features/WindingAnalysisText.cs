@@ -33,7 +33,7 @@ public static class WindingAnalysisText
         if (waves.Length > 0)
             yield return "main MMF harmonics, balanced currents (electrical order: % of the working wave): " +
                          string.Join(", ", waves.Select(Wave));
-        if (a.DifferentialLeakage is { } sigma) yield return $"differential leakage coefficient σδ = {Numbers.Show(100 * sigma, 2)} %";
+        if (a.DifferentialLeakage is { } sigma) yield return $"differential leakage coefficient σδ = {Numbers.Show(sigma, 5)}";
         if (!a.Balanced.SubHarmonics.IsEmpty) yield return "sub-harmonics present (mechanical orders " + string.Join(", ", a.Balanced.SubHarmonics) + ")";
         if (!a.Balanced.EvenHarmonics.IsEmpty) yield return "even harmonics present (mechanical orders " + string.Join(", ", a.Balanced.EvenHarmonics) + ")";
     }

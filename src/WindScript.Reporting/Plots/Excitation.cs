@@ -58,7 +58,7 @@ public sealed class Excitation
 
     public double[] CurrentsAt(double time) => Drive.CurrentsAt(time, Design.Phases.Length);
 
-    /// <summary>The MMF staircase levels (A-turns) at an instant; level i holds from slot centre i to i + 1 (0-based).</summary>
+    /// <summary>The MMF staircase levels (A) at an instant; level i holds from slot centre i to i + 1 (0-based).</summary>
     public double[] MmfLevels(double time) => MmfStaircase.FromCurrents(Spectrum, CurrentsAt(time), time).Levels.ToArray();
 
     /// <summary>The complex amplitude of mechanical order ν at an instant: F_ν(θ) = Re(C·e^(jνθ)).</summary>

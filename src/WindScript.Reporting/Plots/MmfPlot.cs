@@ -17,7 +17,7 @@ public static class MmfPlot
         s.Text(20, 24, $"Air-gap MMF over one revolution: {x.Name}, {x.DescribeTime(time)}", 14, bold: true);
         s.Text(20, 42, x.DescribeCurrents(time), 11, Palette.Muted);
         var area = new ChartArea(80, 60, 710, 260, 0, 360, yMin, yMax);
-        area.DrawAxes(s, "mechanical angle from the start of slot 1 (degrees)", "MMF (A-turns)", Staircases.DegreeTicks, null, ChartArea.Degrees);
+        area.DrawAxes(s, "mechanical angle from the start of slot 1 (degrees)", "MMF (A)", Staircases.DegreeTicks, null, ChartArea.Degrees);
         Staircases.SlotMarks(s, area, d.Slots);
         s.Polyline(Staircases.Points(area, levels), new Stroke(Palette.Staircase, 1.8));
         s.Polyline([.. fundamental.Select(p => area.At(p.X, p.Y))], new Stroke(Palette.Fundamental, 2, [7, 4]));

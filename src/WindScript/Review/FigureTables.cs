@@ -93,9 +93,9 @@ internal static class FigureTables
 
     public static ImmutableArray<FigureRow> MmfFigures(AnalysisResult? a, AnalysisResult? b) =>
     [
-        new("working wave per ampere", a?.Balanced.WorkingWave, b?.Balanced.WorkingWave, "A-turns/A"),
+        new("rotating working wave per ampere (all phases)", a?.Balanced.WorkingWave, b?.Balanced.WorkingWave, "A/A"),
         new("THD (orders to 25p)", Thd(a) * 100, Thd(b) * 100, "%"),
-        new("differential leakage", a?.DifferentialLeakage * 100, b?.DifferentialLeakage * 100, "%"),
+        new("differential leakage coefficient", a?.DifferentialLeakage, b?.DifferentialLeakage, ""),
         new("machine periodicity t", a?.Machine.Periodicity, b?.Machine.Periodicity),
         new("winding periodicity", a?.Machine.WindingPeriodicity, b?.Machine.WindingPeriodicity),
         new("cogging order", a?.Machine.CoggingOrder, b?.Machine.CoggingOrder),
@@ -138,7 +138,7 @@ internal static class FigureTables
         foreach (var drive in drives)
         {
             DriveAnalysis? x = a?.Drives.FirstOrDefault(d => d.Name == drive), y = b?.Drives.FirstOrDefault(d => d.Name == drive);
-            rows.Add(new($"drive {drive}: peak MMF at t = 0", x?.PeakMmf, y?.PeakMmf, "A-turns"));
+            rows.Add(new($"drive {drive}: peak MMF at t = 0", x?.PeakMmf, y?.PeakMmf, "A"));
             if (x?.FundamentalField is not null || y?.FundamentalField is not null)
                 rows.Add(new($"drive {drive}: fundamental B at t = 0", x?.FundamentalField?.FluxDensity, y?.FundamentalField?.FluxDensity, "T"));
         }

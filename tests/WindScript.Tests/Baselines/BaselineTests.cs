@@ -39,6 +39,22 @@ public class BaselineTests
         Assert.Equal(File.ReadAllText(baseline), actual);
     }
 
+    [Fact]
+    public void Every_baseline_has_its_source()
+    {
+        // A baseline whose example or case was renamed or removed would otherwise be kept, unchecked, for ever.
+        var sources = new Dictionary<string, string> { ["examples"] = Repo.Examples, ["cases"] = Repo.Cases };
+        var orphans = Directory.EnumerateFiles(Repo.Baselines, "*.txt", SearchOption.AllDirectories)
+            .Where(b =>
+            {
+                var folder = Path.GetFileName(Path.GetDirectoryName(b)!);
+                return !sources.TryGetValue(folder, out var dir) || !File.Exists(Path.Combine(dir, Path.GetFileNameWithoutExtension(b) + ".wind"));
+            })
+            .Select(b => Path.GetRelativePath(Repo.Root, b))
+            .ToList();
+        Assert.True(orphans.Count == 0, "baselines without a source (delete them or restore the source): " + string.Join(", ", orphans));
+    }
+
     private static string Render(string relativePath)
     {
         var text = File.ReadAllText(Path.Combine(Repo.Root, relativePath));

@@ -113,6 +113,23 @@ public class EvalCommandTests
     [InlineData("2.5ms", 0.0025)]
     [InlineData("250 us", 0.00025)]
     [InlineData("1s", 1)]
-    public void At_accepts_seconds_with_an_optional_unit(string text, double seconds) =>
-        Assert.Equal(seconds, WindScript.Cli.Commands.EvalCommand.ParseTime(text)!.Value, 15);
+    public void At_accepts_seconds_with_an_optional_unit(string text, double seconds)
+    {
+        Assert.True(WindScript.Reporting.Plots.TimeValue.TryParse(text, null, out double parsed, out _));
+        Assert.Equal(seconds, parsed, 15);
+    }
+
+    // eval --at takes what plot --at takes: an electrical angle of the drive's period too
+    // (mill fan: 50 Hz, so 90 deg is 5 ms), and gives the same instant.
+    [Fact]
+    public void At_accepts_an_angle_as_plot_does()
+    {
+        var byAngle = CliRunner.Run("eval", Example("mill_fan_lap.wind"), "--format", "json", "--at", "90deg");
+        var bySeconds = CliRunner.Run("eval", Example("mill_fan_lap.wind"), "--format", "json", "--at", "5ms");
+        Assert.True(byAngle.Exit == 0, byAngle.Err);
+        var a = JsonDocument.Parse(byAngle.Out).RootElement.GetProperty("drives")[0];
+        var b = JsonDocument.Parse(bySeconds.Out).RootElement.GetProperty("drives")[0];
+        Assert.Equal(b.GetProperty("time").GetDouble(), a.GetProperty("time").GetDouble(), 15);
+        Assert.Equal(b.GetProperty("peakMmf").GetDouble(), a.GetProperty("peakMmf").GetDouble(), 9);
+    }
 }
