@@ -11,7 +11,7 @@ rid=${2:-linux-x64}
 out=${1:-artifacts/native/$rid}
 commit=$(git rev-parse --short=12 HEAD 2>/dev/null || echo unknown)
 dotnet publish src/WindScript.Cli -c Release -r "$rid" -p:PublishAot=true -p:SourceRevisionId="$commit" \
-  -p:StripSymbols=true -o "$out" -v quiet -nologo
+  -p:StripSymbols=true -p:DebugType=none -o "$out" -v quiet -nologo
 rm -f "$out"/*.dbg "$out"/*.pdb
 exe="$out/windscript"; [ -f "$exe.exe" ] && exe="$exe.exe"
 case "$rid" in

@@ -18,15 +18,15 @@ public static class SweepCommand
     public const int MaxThreads = 256;
 
     /// <summary>The command line as given, before it is checked.</summary>
-    public sealed record Arguments(string Slots, string Poles, int Phases, int Layers, string Pitch, int Orders, string Format,
+    public sealed record Arguments(string Slots, string Poles, string Phases, string Layers, string Pitch, int Orders, string Format,
         string? Shard, int? Shards, string? Output, bool SkipExisting, int Threads);
 
     public static Command Create(CliIO io)
     {
         var slots = new Option<string>("--slots", "-Q") { Description = "Slot counts: A..B or one number", Required = true };
         var poles = new Option<string>("--poles", "-P") { Description = "Pole counts: C..D or one number (even counts only)", Required = true };
-        var phases = new Option<int>("--phases", "-m") { Description = "Number of phases", DefaultValueFactory = _ => 3 };
-        var layers = new Option<int>("--layers", "-l") { Description = "1 (single layer) or 2 (double layer)", DefaultValueFactory = _ => 2 };
+        var phases = new Option<string>("--phases", "-m") { Description = "Number of phases, or several: 3,5,6", DefaultValueFactory = _ => "3" };
+        var layers = new Option<string>("--layers", "-l") { Description = "1 (single layer), 2 (double layer), or both: 1,2", DefaultValueFactory = _ => "2" };
         var pitch = new Option<string>("--pitch", "-y")
         {
             Description = "Pitch rule: pole (longest not exceeding the pole pitch), pole-K (shortened by K), all (1 to the pole pitch), or N slots",
@@ -50,8 +50,6 @@ public static class SweepCommand
         };
         var skipExisting = new Option<bool>("--skip-existing") { Description = "With --output: do nothing if the part's file exists (parts are written whole), so rerunning every task fills in only the missing parts" };
         var threads = new Option<int>("--threads") { Description = "Worker threads (default: one per core)", DefaultValueFactory = _ => Environment.ProcessorCount };
-        UsageMessages.InRange(phases, 2, InputLimits.MaxPhases);
-        UsageMessages.InRange(layers, 1, 2);
         UsageMessages.InRange(orders, 1, InputLimits.MaxOrders);
         UsageMessages.InRange(threads, 1, MaxThreads);
         UsageMessages.InRange(shards, 1, 1_000_000);
@@ -59,7 +57,7 @@ public static class SweepCommand
         {
             slots, poles, phases, layers, pitch, orders, format, shard, shards, output, skipExisting, threads,
         };
-        command.SetAction(parse => Run(io, new Arguments(parse.GetValue(slots)!, parse.GetValue(poles)!, parse.GetValue(phases), parse.GetValue(layers),
+        command.SetAction(parse => Run(io, new Arguments(parse.GetValue(slots)!, parse.GetValue(poles)!, parse.GetValue(phases)!, parse.GetValue(layers)!,
             parse.GetValue(pitch)!, parse.GetValue(orders), parse.GetValue(format)!, parse.GetValue(shard), parse.GetValue(shards),
             parse.GetValue(output), parse.GetValue(skipExisting), parse.GetValue(threads))));
         return command;
@@ -71,6 +69,8 @@ public static class SweepCommand
         var slotRange = ParseRange(a.Slots, "--slots", 2, InputLimits.MaxSlots, ref error);
         var poleRange = ParseRange(a.Poles, "--poles", 2, InputLimits.MaxPoles, ref error);
         if (error is null && poleRange.From == poleRange.To && poleRange.From % 2 != 0) error = $"--poles: the pole count must be even, not {poleRange.From}";
+        var phaseCounts = ParseList(a.Phases, "--phases", 2, InputLimits.MaxPhases, ref error);
+        var layerCounts = ParseList(a.Layers, "--layers", 1, 2, ref error);
         var rule = error is null ? PitchRule.Parse(a.Pitch, out error) : null;
         if (error is not null && rule is null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--pitch: " + error;
         var (shard, shardSource) = error is null ? ResolveShard(io, a, ref error) : (SweepShard.Whole, null);
@@ -84,7 +84,7 @@ public static class SweepCommand
             spec = new SweepSpec
             {
                 SlotsFrom = slotRange.From, SlotsTo = slotRange.To, PolesFrom = poleRange.From, PolesTo = poleRange.To,
-                Phases = a.Phases, Layers = a.Layers, Pitch = rule!, Orders = a.Orders,
+                Phases = phaseCounts[0], Layers = layerCounts[0], PhaseCounts = phaseCounts, LayerCounts = layerCounts, Pitch = rule!, Orders = a.Orders,
             };
             error = spec.Problem();
         }
@@ -179,6 +179,28 @@ public static class SweepCommand
         var shard = SweepShard.Parse(a.Shard, out error) ?? SweepShard.Whole;
         if (error is null && a.Shards is { } n && n != shard.Count) error = $"--shard {a.Shard} and --shards {n} disagree";
         return (shard, null);
+    }
+
+    /// <summary>"3" or "3,5,6": whole numbers within min..max.</summary>
+    private static int[] ParseList(string text, string option, int min, int max, ref string? error)
+    {
+        if (error is not null) return [0];
+        var values = new List<int>();
+        foreach (var part in text.Split(','))
+        {
+            if (!int.TryParse(part.Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out int value))
+            {
+                error = $"{option} takes a whole number or a list of them (e.g. 3,5,6), not '{text}'";
+                return [0];
+            }
+            if (value < min || value > max)
+            {
+                error = $"{option} values must lie within {min}..{max}, not {value}";
+                return [0];
+            }
+            values.Add(value);
+        }
+        return [.. values.Distinct().Order()];
     }
 
     private static (int From, int To) ParseRange(string text, string option, int min, int max, ref string? error)

@@ -21,7 +21,8 @@ internal sealed class SweepEvaluator
     private const double Negligible = MachineAnalysis.Negligible;
 
     private readonly SweepSpec _spec;
-    private readonly PhaseBelts _belts;
+    private readonly Dictionary<int, PhaseBelts> _beltsByPhases;
+    private PhaseBelts _belts;
     private readonly StarLayout _layout;
     private readonly CoilStarSpectrum _spectrum;
     private int[] _conductors;
@@ -32,12 +33,13 @@ internal sealed class SweepEvaluator
     {
         if (spec.Problem() is { } problem) throw new ArgumentException(problem, nameof(spec));
         _spec = spec;
-        _belts = PhaseBelts.ForPhases(spec.Phases)!;
+        _beltsByPhases = spec.PhaseList.ToDictionary(m => m, m => PhaseBelts.ForPhases(m)!);
+        _belts = _beltsByPhases[spec.PhaseList[0]];
         // Sized once for the largest slot count, so that memory stays flat along the sweep.
         int q = spec.SlotsTo;
         _layout = new StarLayout(q);
         _spectrum = new CoilStarSpectrum(q);
-        _conductors = new int[spec.Phases * q];
+        _conductors = new int[spec.PhaseList[^1] * q];
         _factors = new double[q / 2 + 1];
         _present = new bool[q / 2 + 1];
     }
@@ -45,8 +47,10 @@ internal sealed class SweepEvaluator
     /// <summary>Evaluates one candidate into <paramref name="record"/>; false if it admits no balanced layout (the record is then unchanged).</summary>
     public bool TryEvaluate(SweepCandidate candidate, SweepRecord record)
     {
-        int q = candidate.Slots, poles = candidate.Poles, p = poles / 2, m = _spec.Phases;
-        var outcome = WindingSynthesizer.LayWithRule(q, p, _belts, _spec.Layers, candidate.Pitch, _layout, out int pitch);
+        int q = candidate.Slots, poles = candidate.Poles, p = poles / 2, m = candidate.Phases;
+        if (!_beltsByPhases.TryGetValue(m, out var belts)) throw new ArgumentException($"{m} phases are not in the sweep", nameof(candidate));
+        _belts = belts;
+        var outcome = WindingSynthesizer.LayWithRule(q, p, _belts, candidate.Layers, candidate.Pitch, _layout, out int pitch);
         if (outcome != LayoutOutcome.Balanced) return false;
 
         EnsureCapacity(q, m, p);
@@ -65,7 +69,7 @@ internal sealed class SweepEvaluator
         record.Slots = q;
         record.Poles = poles;
         record.Phases = m;
-        record.Layers = _spec.Layers;
+        record.Layers = candidate.Layers;
         record.Pitch = pitch;
         record.Periodicity = (int)WindScript.Numerics.IntegerMath.Gcd(q, p);
         record.CoggingOrder = (int)WindScript.Numerics.IntegerMath.Lcm(q, poles);

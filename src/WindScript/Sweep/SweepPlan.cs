@@ -4,8 +4,8 @@ using WindScript.Synthesis;
 namespace WindScript.Sweep;
 
 /// <summary>
-/// The layouts of a sweep, in a fixed order: slots ascending, then poles ascending, then pitch
-/// ascending; combinations that admit no balanced winding are left out. The enumeration is lazy,
+/// The layouts of a sweep, in a fixed order: slots ascending, then poles ascending, then phase
+/// count, layer count and pitch ascending; combinations that admit no balanced winding are left out. The enumeration is lazy,
 /// so memory stays flat however large the ranges.
 /// </summary>
 internal static class SweepPlan
@@ -14,16 +14,20 @@ internal static class SweepPlan
     public static IEnumerable<SweepCandidate> All(SweepSpec spec)
     {
         if (spec.Problem() is { } problem) throw new ArgumentException(problem, nameof(spec));
-        var belts = PhaseBelts.ForPhases(spec.Phases)!;
+        var phases = spec.PhaseList;
+        var layers = spec.LayerList;
+        var belts = phases.Select(m => PhaseBelts.ForPhases(m)!).ToArray();
         var pitches = new int[spec.Pitch.MaxCandidates(spec.SlotsTo)];
         int firstPoles = spec.PolesFrom + spec.PolesFrom % 2;
         for (int q = spec.SlotsFrom; q <= spec.SlotsTo; q++)
             for (int poles = firstPoles; poles <= spec.PolesTo; poles += 2)
-            {
-                if (!Feasibility.IsFeasible(q, poles / 2, belts, spec.Layers)) continue;
-                int n = spec.Pitch.Candidates(q, poles, pitches);
-                for (int i = 0; i < n; i++) yield return new SweepCandidate(q, poles, pitches[i]);
-            }
+                for (int b = 0; b < belts.Length; b++)
+                    foreach (int l in layers)
+                    {
+                        if (!Feasibility.IsFeasible(q, poles / 2, belts[b], l)) continue;
+                        int n = spec.Pitch.Candidates(q, poles, pitches);
+                        for (int i = 0; i < n; i++) yield return new SweepCandidate(q, poles, pitches[i], phases[b], l);
+                    }
     }
 
     /// <summary>The candidates of one shard (a first pass sums the work of all candidates to place the cuts).</summary>
