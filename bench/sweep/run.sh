@@ -18,3 +18,10 @@ hyperfine -N --warmup 5 --runs 40 \
   "$out/windscript sweep --slots 6..120 --poles 2..60 --threads 1" \
   "$out/windscript --version" \
   "$python bench/sweep/numpy_sweep.py"
+# The whole design space (slow for the reference: minutes; a few runs only on a shared machine).
+hyperfine -N --warmup 1 --runs 5 \
+  "$out/windscript sweep --slots 6..360 --poles 2..180" \
+  "$out/windscript sweep --slots 6..360 --poles 2..180 --pitch all"
+hyperfine -N --runs 2 \
+  "$python bench/sweep/numpy_sweep.py 6..360 2..180" \
+  "$python bench/sweep/numpy_sweep.py 6..360 2..180 all"
