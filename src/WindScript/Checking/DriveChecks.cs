@@ -15,6 +15,8 @@ internal static class DriveChecks
         if (c.PhaseCount < 2) return; // a single phase returns through its own terminals
         foreach (var drive in c.Design.Drives)
         {
+            // A term that failed to evaluate was reported; the rest of the drive is not what was meant.
+            if (drive.Incomplete) continue;
             var groups = CurrentPhasors.Of(drive, c.PhaseCount);
             double scale = groups.SelectMany(g => g.Phasors).Select(x => x.Magnitude).DefaultIfEmpty(0).Max();
             if (scale == 0) continue;
@@ -25,7 +27,7 @@ internal static class DriveChecks
                 {
                     string freq = g.IsDirect ? "direct" : $"{g.FrequencyHz.ToString("0.###", CultureInfo.InvariantCulture)} Hz";
                     c.Diagnostics.Add(DiagnosticCatalog.CurrentsDoNotSumToZero, drive.NameSpan,
-                        $"the {freq} currents of drive '{drive.Name}' sum to {residual.Sum.Magnitude.ToString("0.###", CultureInfo.InvariantCulture)} A (peak), not zero, and the drive has no 'neutral'");
+                        $"the {freq} currents of drive '{drive.Name}' sum to {residual.Sum.Magnitude.ToString("0.###", CultureInfo.InvariantCulture)} A{(g.IsDirect ? "" : " (peak)")}, not zero, and the drive has no 'neutral'");
                 }
             }
             CheckAmplitudes(c, drive, groups, scale);

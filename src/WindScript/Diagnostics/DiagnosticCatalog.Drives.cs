@@ -13,4 +13,8 @@ internal static partial class DiagnosticCatalog
     public static readonly DiagnosticDescriptor UnequalPhaseCurrents = new(
         "WS4003", Severity.Warning, "Phases differ in amplitude or frequency",
         "The alternating currents of the phases differ in amplitude or in frequency content. Unbalanced currents produce a backward-rotating field besides the forward one (symmetrical components), with torque pulsation and extra losses. DC-only drives (resistance or standstill tests) are exempt.");
+
+    public static readonly DiagnosticDescriptor SpeedAsFrequency = new(
+        "WS4004", Severity.Error, "A speed written as a current's frequency",
+        "'rpm' measures how fast the rotor turns, not how often a phase current alternates. A sine's 'at' takes the current's frequency (Hz or rad/s). The two are tied by the pole pairs: the synchronous speed is n = 60 f / p rpm, so the frequency that turns a 2p-pole field at n rpm is f = n p / 60 Hz (common practice; Fitzgerald, Kingsley, Umans, Electric Machinery: synchronous speed). Read as a frequency, 750 rpm would silently become 12.5 Hz; the fix writes the synchronous frequency at the machine's pole count instead.");
 }

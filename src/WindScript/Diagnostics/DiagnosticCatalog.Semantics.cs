@@ -76,5 +76,9 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor UnknownFunction = new(
         "WS2019", Severity.Error, "Unknown function",
-        "The built-in functions are wrap(n) (a slot number brought into 1..Q), abs, min, max, floor, ceil, round, sqrt, gcd and lcm.");
+        "The built-in functions are wrap(n) (a slot number brought into 1..Q), abs, min, max, floor, ceil, round, sqrt, gcd and lcm, and electrical(angle) and mechanical(angle), which state the kind of an angle inside an angle property.");
+
+    public static readonly DiagnosticDescriptor AngleKindOutOfPlace = new(
+        "WS2030", Severity.Error, "electrical() or mechanical() outside an angle property",
+        "Each angle property means one kind of angle: 'phase_shift' and a sine's 'phase' are electrical angles, 'skew' (when given as an angle) is a mechanical angle around the bore. electrical(x) and mechanical(x) state the kind of x where the property expects the other one, and convert it through the pole pairs: theta_electrical = p * theta_mechanical (Pyrhonen, Jokinen, Hrabovcova, Design of Rotating Electrical Machines, 2nd ed., ch. 2). So 'skew electrical(30 deg)' on a 4-pole machine is a 15 deg mechanical skew, and 'phase_shift mechanical(60 deg)' there is 120 deg electrical. They need a property that expects an angle (not a 'let', where the kind is not yet known) and the machine's pole count.");
 }

@@ -30,6 +30,9 @@ public sealed record Drive
     /// <summary>For a balanced set: the phase indices in the stated sequence; empty otherwise.</summary>
     public ImmutableArray<int> Sequence { get; init; } = [];
 
+    /// <summary>True when a current of the drive failed to evaluate (and was reported): its checks are skipped.</summary>
+    public bool Incomplete { get; init; }
+
     /// <summary>Where the drive block is in the source.</summary>
     public TextSpan Span { get; init; }
 

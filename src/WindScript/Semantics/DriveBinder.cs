@@ -11,17 +11,22 @@ namespace WindScript.Semantics;
 /// an rms amplitude is converted to the peak (Î = √2·I_rms); a balanced set gives the phases
 /// in the stated sequence time shifts of 0, -δ, -2δ, ... where δ is the machine's phase shift.
 /// </summary>
-internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator evaluator, SemanticModel model, PhaseTable phases, double phaseShiftDegrees)
+internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator evaluator, SemanticModel model, PhaseTable phases, double phaseShiftDegrees,
+    int? polePairs = null)
 {
+    // Phases driven by a balanced line so far (another balanced line may add to them).
+    private readonly HashSet<int> _byBalanced = [];
+
     public Drive Bind(BlockSyntax block, Scope parent)
     {
+        _byBalanced.Clear();
         var scope = new Scope(parent);
         int m = phases.Phases.Count;
         var components = new List<CurrentComponent>[m];
         var assigned = new Syntax.NameSyntax?[m];
         var spans = new Text.TextSpan[m];
         for (int k = 0; k < m; k++) components[k] = [];
-        bool neutral = false;
+        bool neutral = false, incomplete = false;
         ImmutableArray<int> sequence = [];
 
         foreach (var statement in block.Body)
@@ -41,9 +46,14 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     foreach (var term in current.Terms)
                         if (BindTerm(term.Term, scope) is { } c)
                             components[k].Add(term.Negated ? c with { Peak = -c.Peak } : c);
+                        else
+                            incomplete = true;
                     break;
                 case BalancedSyntax balanced:
-                    sequence = BindBalanced(balanced, scope, components, assigned, spans);
+                    var (order, bound) = BindBalanced(balanced, scope, components, assigned, spans);
+                    if (!bound) incomplete = true;
+                    // Several balanced lines (a fundamental set and a harmonic set) share one drive; the first names the sequence.
+                    if (sequence.IsDefaultOrEmpty) sequence = order;
                     break;
                 default:
                     BlockRules.ReportMisplaced(diagnostics, statement, "a drive block");
@@ -57,6 +67,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
             Currents = [.. Enumerable.Range(0, m).Select(k => new PhaseCurrent(k, [.. components[k]], spans[k]))],
             Neutral = neutral,
             Sequence = sequence,
+            Incomplete = incomplete,
             Span = block.Span,
             NameSpan = block.Name.IsMissing ? block.Keyword.Span : block.Name.Span,
         };
@@ -74,17 +85,22 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
         return true;
     }
 
-    private ImmutableArray<int> BindBalanced(BalancedSyntax balanced, Scope scope, List<CurrentComponent>[] components,
+    /// <summary>
+    /// A balanced set adds one component to every phase. Several balanced lines add up (an
+    /// inverter drive: the fundamental set plus a harmonic set in its own sequence); a phase
+    /// driven by its own line as well is a duplicate. Returns the order and whether the wave bound.
+    /// </summary>
+    private (ImmutableArray<int> Order, bool Bound) BindBalanced(BalancedSyntax balanced, Scope scope, List<CurrentComponent>[] components,
         Syntax.NameSyntax?[] assigned, Text.TextSpan[] spans)
     {
         var order = new List<int>();
         foreach (var name in balanced.Sequence)
         {
-            if (phases.Resolve(name) is not { } k) return [];
+            if (phases.Resolve(name) is not { } k) return ([], false);
             if (order.Contains(k))
             {
                 diagnostics.Add(DiagnosticCatalog.InvalidSequence, name.Span, $"phase '{name.Text}' appears twice in the sequence");
-                return [];
+                return ([], false);
             }
             order.Add(k);
         }
@@ -93,19 +109,56 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
             var missing = phases.Phases.Where(p => !order.Contains(p.Index)).Select(p => p.Name);
             diagnostics.Add(DiagnosticCatalog.InvalidSequence, balanced.SequenceKeyword.Span.Cover(balanced.Sequence[^1].Span),
                 $"the sequence must name every phase once; missing: {string.Join(" ", missing)}");
-            return [];
+            return ([], false);
         }
-        if (BindTerm(balanced.Wave, scope) is not { } wave) return [.. order];
+        if (BindTerm(balanced.Wave, scope) is not { } wave) return ([.. order], false);
         double delta = phaseShiftDegrees * Math.PI / 180;
         for (int j = 0; j < order.Count; j++)
         {
             int k = order[j];
-            if (!MarkAssigned(k, balanced.Sequence[j], assigned)) continue;
-            spans[k] = balanced.Span;
+            if (_byBalanced.Contains(k)) { }
+            else if (!MarkAssigned(k, balanced.Sequence[j], assigned)) continue;
+            else _byBalanced.Add(k);
+            if (spans[k] == default) spans[k] = balanced.Span;
             components[k].Add(wave with { PhaseAngle = wave.PhaseAngle - j * delta });
         }
-        return [.. order];
+        return ([.. order], true);
     }
+
+    /// <summary>
+    /// 'rpm' measures a rotor speed, not how often a current alternates: "at 750 rpm" is refused,
+    /// with the synchronous frequency f = n·p/60 at the machine's pole pairs (common practice).
+    /// </summary>
+    private bool SpeedWrittenAsFrequency(ExpressionSyntax frequency)
+    {
+        var literal = frequency as NumberSyntax ?? (frequency as ParenthesizedExpressionSyntax)?.Inner as NumberSyntax;
+        bool hasRpm = literal is { Unit.Text: "rpm" } || Mentions(frequency, "rpm");
+        if (!hasRpm) return false;
+        if (literal is { Unit.Text: "rpm" } n && polePairs is { } p and > 0)
+        {
+            double hz = n.Value * p / 60;
+            string written = ExpressionEvaluator.Format(hz) + " Hz";
+            diagnostics.Add(DiagnosticCatalog.SpeedAsFrequency.At(frequency.Span,
+                    $"{n.Literal} rpm is a speed; at {2 * p} poles the synchronous frequency is {written}: write `at {written}`")
+                with { Fix = new CodeFix($"Write {written}", [new TextEdit(frequency.Span, written)]) });
+        }
+        else
+        {
+            diagnostics.Add(DiagnosticCatalog.SpeedAsFrequency, frequency.Span,
+                "rpm is a speed, not the frequency of a current: write the current's frequency in Hz (the synchronous frequency is speed x pole pairs / 60)");
+        }
+        return true;
+    }
+
+    private static bool Mentions(ExpressionSyntax e, string unit) => e switch
+    {
+        NumberSyntax n => n.Unit?.Text == unit,
+        ParenthesizedExpressionSyntax paren => Mentions(paren.Inner, unit),
+        UnaryExpressionSyntax u => Mentions(u.Operand, unit),
+        BinaryExpressionSyntax b => Mentions(b.Left, unit) || Mentions(b.Right, unit),
+        CallExpressionSyntax call => call.Arguments.Any(a => Mentions(a, unit)),
+        _ => false,
+    };
 
     private CurrentComponent? BindTerm(WaveTermSyntax term, Scope scope)
     {
@@ -116,11 +169,13 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     ? new CurrentComponent(i, 0, 0, dc.Span) : null;
             case SineTermSyntax sine:
                 var amplitude = evaluator.EvaluateAs(sine.Amplitude, scope, Dimension.CurrentDim, "a current amplitude");
+                if (SpeedWrittenAsFrequency(sine.Frequency)) return null;
                 var omega = evaluator.EvaluateAs(sine.Frequency, scope, Dimension.AngularFrequency, "a frequency");
                 double phase = 0;
                 if (sine.Phase is { } p)
                 {
-                    if (evaluator.EvaluateAs(p, scope, Dimension.AngleDim, "a phase angle") is not { } ph) return null;
+                    // The time phase of the current, an electrical angle.
+                    if (evaluator.EvaluateAngle(p, scope, AngleKind.Electrical, "a phase angle") is not { } ph) return null;
                     phase = ph;
                 }
                 if (omega is { } w && w <= 0)

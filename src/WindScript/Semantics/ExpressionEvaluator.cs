@@ -10,10 +10,41 @@ namespace WindScript.Semantics;
 /// Evaluates expressions to quantities with dimensions. A failed evaluation reports once and
 /// yields null; callers skip what depends on it, so one mistake gives one diagnostic.
 /// </summary>
+/// <summary>Which angle a property means: electrical (θ_e = p·θ_m, phase shifts and time phases) or mechanical (around the bore).</summary>
+internal enum AngleKind { Electrical, Mechanical }
+
 internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
 {
     /// <summary>Slot count for wrap(); 0 until the machine is known.</summary>
     public int Slots { get; set; }
+
+    /// <summary>Pole pairs for electrical() and mechanical(); 0 until the machine's poles are known.</summary>
+    public int PolePairs { get; set; }
+
+    // The kind of angle the property being evaluated expects (null outside angle properties).
+    private AngleKind? _angleContext;
+
+    /// <summary>
+    /// Evaluates an angle property that is electrical or mechanical by definition. Inside it,
+    /// electrical(x) and mechanical(x) state the kind of x and convert it through the pole pairs
+    /// (θ_electrical = p·θ_mechanical); a bare angle is taken as the property's own kind.
+    /// </summary>
+    public double? EvaluateAngle(ExpressionSyntax expression, Scope scope, AngleKind kind, string what)
+    {
+        var saved = _angleContext;
+        _angleContext = kind;
+        try { return EvaluateAs(expression, scope, Dimension.AngleDim, what); }
+        finally { _angleContext = saved; }
+    }
+
+    /// <summary>As <see cref="Evaluate"/>, inside an angle property of the given kind.</summary>
+    public Quantity? EvaluateInAngleContext(ExpressionSyntax expression, Scope scope, AngleKind kind)
+    {
+        var saved = _angleContext;
+        _angleContext = kind;
+        try { return Evaluate(expression, scope); }
+        finally { _angleContext = saved; }
+    }
 
     /// <summary>The value, or null after one diagnostic; never infinite or NaN (WS2042 at the first place that would be).</summary>
     public Quantity? Evaluate(ExpressionSyntax expression, Scope scope)
@@ -183,6 +214,8 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
                 double w = (a.Value - 1) % Slots;
                 if (w < 0) w += Slots;
                 return Quantity.Plain(w + 1);
+            case "electrical" or "mechanical":
+                return ConvertAngle(call, f == "electrical" ? AngleKind.Electrical : AngleKind.Mechanical, a);
             case "abs": return a with { Value = Math.Abs(a.Value) };
             case "floor": return a with { Value = Math.Floor(a.Value) };
             case "ceil": return a with { Value = Math.Ceiling(a.Value) };
@@ -228,6 +261,30 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
             return null;
         }
         return Quantity.Plain(lcm);
+    }
+
+    private Quantity? ConvertAngle(CallExpressionSyntax call, AngleKind written, Quantity a)
+    {
+        string f = call.Function.Text;
+        if (a.Dimension != Dimension.AngleDim)
+        {
+            diagnostics.Add(DiagnosticCatalog.WrongDimension, call.Arguments[0].Span, $"{f}() takes an angle, but this is {a.Dimension.Describe()}");
+            return null;
+        }
+        if (_angleContext is not { } expected)
+        {
+            diagnostics.Add(DiagnosticCatalog.AngleKindOutOfPlace, call.Span,
+                $"{f}() states the kind of an angle where a property expects one (phase_shift and a sine's phase are electrical, skew is mechanical); write it in that property, not here");
+            return null;
+        }
+        if (written == expected) return a;
+        if (PolePairs <= 0)
+        {
+            diagnostics.Add(DiagnosticCatalog.AngleKindOutOfPlace, call.Span, $"{f}() converts through the pole pairs, but the machine's pole count is not known");
+            return null;
+        }
+        // θ_electrical = p·θ_mechanical (Pyrhonen et al., ch. 2).
+        return a with { Value = written == AngleKind.Electrical ? a.Value / PolePairs : a.Value * PolePairs };
     }
 
     // ---- typed evaluation with the diagnostics a designer needs ------------------------------

@@ -121,6 +121,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
                     diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span, $"the pole count must be even (north and south poles pair up), not {n}");
                     poles = null;
                 }
+                if (poles is { } pairsOf) evaluator.PolePairs = pairsOf / 2;
                 return (facts with { Poles = poles, PolesSpan = p.Span }, g);
             case PropertyName.Bore: return (facts, g with { BoreDiameter = Positive(Length("the bore diameter"), "the bore diameter") });
             case PropertyName.Stack: return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
@@ -136,16 +137,19 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case PropertyName.GapFluxDensity:
                 return (facts, g with { GapFluxDensity = evaluator.EvaluateAs(p.Value, scope, Dimension.FluxDensity, "the gap flux density") });
             case PropertyName.PhaseShift:
-                return (facts with { PhaseShiftDegrees = evaluator.EvaluateAs(p.Value, scope, Dimension.AngleDim, "the phase shift") * 180 / Math.PI }, g);
+                // An electrical angle: the spacing of the phase axes in electrical degrees.
+                return (facts with { PhaseShiftDegrees = evaluator.EvaluateAngle(p.Value, scope, AngleKind.Electrical, "the phase shift") * 180 / Math.PI }, g);
             case PropertyName.Skew:
-                // In slot pitches, or as a mechanical angle (converted once the slot count is known).
-                if (evaluator.Evaluate(p.Value, scope) is { } q)
+                // In slot pitches, or as a mechanical angle around the bore (converted through the slot count).
+                if (evaluator.EvaluateInAngleContext(p.Value, scope, AngleKind.Mechanical) is { } q)
                 {
                     bool known = q.Dimension == Dimension.SlotDim || q.Dimension == Dimension.AngleDim && facts.Slots is not null;
                     if (known && evaluator.WithinMagnitude(p.Value, q.Value, "the skew") is null) return (facts, g);
                     if (q.Dimension == Dimension.SlotDim) return (facts, g with { SkewSlots = q.Value });
                     if (q.Dimension == Dimension.AngleDim && facts.Slots is { } slots) return (facts, g with { SkewSlots = q.Value * slots / (2 * Math.PI) });
-                    evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");
+                    if (q.Dimension.IsNone) evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the skew");
+                    else if (q.Dimension != Dimension.AngleDim)
+                        diagnostics.Add(DiagnosticCatalog.WrongDimension, p.Value.Span, $"the skew must be a number of slots or a mechanical angle, but this is {q.Dimension.Describe()}");
                 }
                 return (facts, g);
         }

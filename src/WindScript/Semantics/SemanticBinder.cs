@@ -98,11 +98,12 @@ internal static class SemanticBinder
                 else driveNames[name.Text] = name.Span;
                 model.Define(name.Text, SymbolKind.Drive, name.Span);
             }
-            drives.Add(new DriveBinder(diagnostics, evaluator, model, phases, shift).Bind(block, top));
+            drives.Add(new DriveBinder(diagnostics, evaluator, model, phases, shift, machine.Poles / 2).Bind(block, top));
         }
 
+        HashSet<string>? mentioned = null;
         foreach (var symbol in model.Symbols)
-            if (symbol.Kind == SymbolKind.Value && !symbol.Used)
+            if (symbol.Kind == SymbolKind.Value && !symbol.Used && !(mentioned ??= NameMentions.Of(tree)).Contains(symbol.Name))
                 diagnostics.Add(DiagnosticCatalog.UnusedName, symbol.Definition, $"'{symbol.Name}' is defined but never used");
 
         WindingDesign? design = null;

@@ -65,7 +65,8 @@ internal sealed class WindingBinder(
 
         if (layers is null && !seen.ContainsKey(Vocabulary.Word(PropertyName.Layers)))
             diagnostics.Add(DiagnosticCatalog.MissingDeclaration, block.Keyword.Span, $"winding '{block.Name.Text}' does not say how many layers it has (add 'layers 1' or 'layers 2')");
-        _layers = layers ?? 2;
+        // Without a (valid) 'layers', read the patterns as their form says, so one omission stays one error.
+        _layers = layers ?? (block.Body.OfType<PatternSyntax>().Any(p => p.Layer.Text == "slots") ? 1 : 2);
 
         // Coils, in source order.
         var settings = new CoilGroupSettings("", turns, pitch, pitchSpan);
@@ -121,7 +122,7 @@ internal sealed class WindingBinder(
                     patterns.Collect(pattern, scope);
                     break;
                 case ForSyntax loop:
-                    BindLoop(loop, scope, settings);
+                    BindLoop(loop, scope, settings, allowGroups ? groupNames : null);
                     break;
                 case BlockSyntax { Kind: BlockKind.Group } group when allowGroups:
                     BindGroup(group, scope, settings, groupNames);
@@ -140,12 +141,18 @@ internal sealed class WindingBinder(
         if (!group.Name.IsMissing)
         {
             var n = group.Name;
+            // A group inside a loop is bound once per pass: the same group again, not a duplicate.
             if (groupNames.TryGetValue(name, out var first))
-                diagnostics.Add(DiagnosticCatalog.DuplicateName.At(n.Span, $"group '{name}' is already defined in this winding")
-                    with { Related = [new RelatedSpan(first, "first defined here")] });
+            {
+                if (first != n.Span)
+                    diagnostics.Add(DiagnosticCatalog.DuplicateName.At(n.Span, $"group '{name}' is already defined in this winding")
+                        with { Related = [new RelatedSpan(first, "first defined here")] });
+            }
             else
+            {
                 groupNames[name] = n.Span;
-            model.Define(name, SymbolKind.Group, n.Span);
+                model.Define(name, SymbolKind.Group, n.Span);
+            }
         }
         var scope = new Scope(parent);
         var seen = new Dictionary<string, PropertySyntax>();
@@ -176,7 +183,7 @@ internal sealed class WindingBinder(
         BindCoilStatements(rest, scope, settings, allowGroups: false, groupNames, isWinding: false);
     }
 
-    private void BindLoop(ForSyntax loop, Scope parent, CoilGroupSettings settings)
+    private void BindLoop(ForSyntax loop, Scope parent, CoilGroupSettings settings, Dictionary<string, TextSpan>? groupNames)
     {
         var from = evaluator.EvaluateInteger(loop.From, parent, "the start of a range");
         var to = evaluator.EvaluateInteger(loop.To, parent, "the end of a range");
@@ -208,7 +215,8 @@ internal sealed class WindingBinder(
                 {
                     case LetSyntax let: LetBinder.Bind(let, bodyScope, evaluator, diagnostics, model); break;
                     case CoilSyntax coil: BindCoil(coil, bodyScope, settings); break;
-                    case ForSyntax inner: BindLoop(inner, bodyScope, settings); break;
+                    case ForSyntax inner: BindLoop(inner, bodyScope, settings, groupNames); break;
+                    case BlockSyntax { Kind: BlockKind.Group } group when groupNames is not null: BindGroup(group, bodyScope, settings, groupNames); break;
                     default:
                         if (i == 0) BlockRules.ReportMisplaced(diagnostics, statement, "a 'for' loop");
                         break;

@@ -48,8 +48,8 @@ internal static class Vocabulary
         new(Sequence, "sequence U V W — the order in which the phase currents peak"),
         new(Sine, "sine AMPLITUDE peak|rms at FREQUENCY phase ANGLE — i = Î·cos(ωt + φ)") { ValueDimension = Dimension.CurrentDim },
         new(Dc, "dc CURRENT — direct current") { ValueDimension = Dimension.CurrentDim },
-        new(At, "at FREQUENCY — the frequency of a sinusoid (Hz, rad/s or rpm)") { ValueDimension = Dimension.AngularFrequency },
-        new(Phase, "phase ANGLE — the time phase angle φ of a sinusoid") { ValueDimension = Dimension.AngleDim },
+        new(At, "at FREQUENCY — the frequency of a sinusoid (Hz or rad/s; a speed in rpm is refused: the synchronous frequency is n·p/60)") { ValueDimension = Dimension.AngularFrequency },
+        new(Phase, "phase ANGLE — the time phase angle φ of a sinusoid, an electrical angle") { ValueDimension = Dimension.AngleDim },
         new(Neutral, "neutral — the star point is connected (zero-sequence current may flow)"),
     ];
 
@@ -75,8 +75,8 @@ internal static class Vocabulary
         new(PropertyName.SlotOpening, "slot_opening", [Machine], ValueKind.Quantity, Dimension.LengthDim, "slot_opening LENGTH — slot opening width at the bore (for Carter's coefficient)"),
         new(PropertyName.RotorRadius, "rotor_radius", [Machine], ValueKind.Quantity, Dimension.LengthDim, "rotor_radius LENGTH — radius of the rotor's gap surface (for a thick gap)"),
         new(PropertyName.Rotor, "rotor", [Machine], ValueKind.Word, Dimension.None, "rotor inside|outside — where the rotor lies; outside for hub and fan motors (bore is then the stator's outer diameter at the gap)") { Words = ["inside", "outside"] },
-        new(PropertyName.Skew, "skew", [Machine], ValueKind.Quantity, Dimension.SlotDim, "skew N slots | ANGLE — skew of the stator slots") { AlsoAccepts = Dimension.AngleDim },
-        new(PropertyName.PhaseShift, "phase_shift", [Machine], ValueKind.Quantity, Dimension.AngleDim, "phase_shift ANGLE — electrical angle between successive phase axes (default 360/m)"),
+        new(PropertyName.Skew, "skew", [Machine], ValueKind.Quantity, Dimension.SlotDim, "skew N slots | ANGLE — skew of the stator slots; an angle here is mechanical (around the bore): write electrical(ANGLE) to give it in electrical degrees") { AlsoAccepts = Dimension.AngleDim },
+        new(PropertyName.PhaseShift, "phase_shift", [Machine], ValueKind.Quantity, Dimension.AngleDim, "phase_shift ANGLE — electrical angle between successive phase axes (default 360/m); write mechanical(ANGLE) to give it around the bore"),
         new(PropertyName.GapFluxDensity, "gap_flux_density", [Machine], ValueKind.Quantity, Dimension.FluxDensity, "gap_flux_density T — peak fundamental air-gap flux density (for back-EMF)"),
         new(PropertyName.Layers, "layers", [Winding], ValueKind.WholeNumber, Dimension.None, "layers 1|2 — coil sides per slot"),
         new(PropertyName.Turns, "turns", [Winding, Group], ValueKind.WholeNumber, Dimension.None, "turns N — turns per coil"),
@@ -113,6 +113,8 @@ internal static class Vocabulary
         new("sqrt", 1, "sqrt(x): square root of a plain non-negative number"),
         new("gcd", 2, "gcd(a, b): greatest common divisor of two whole numbers"),
         new("lcm", 2, "lcm(a, b): least common multiple of two whole numbers"),
+        new("electrical", 1, "electrical(ANGLE): an electrical angle, in a property that expects a mechanical one (divided by the pole pairs)"),
+        new("mechanical", 1, "mechanical(ANGLE): a mechanical angle, in a property that expects an electrical one (multiplied by the pole pairs)"),
     ];
 
     /// <summary>The units (their own table, with dimensions and factors to SI).</summary>

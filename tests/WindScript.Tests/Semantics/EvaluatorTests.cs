@@ -216,7 +216,7 @@ public class EvaluatorTests
               balanced sine 10 A rms at 50 Hz phase 30 deg sequence U V W
             }
             drive e {
-              U = sine 2 A peak at 1500 rpm
+              U = sine 2 A peak at 157.5 rad/s
               neutral
             }
             """);
@@ -230,7 +230,7 @@ public class EvaluatorTests
         Assert.Equal(-210, angles[2], 9);
         // Balanced currents sum to zero at any instant (common practice).
         for (double t = 0; t < 0.02; t += 0.0013) Assert.Equal(0, rated.CurrentsAt(t).Sum(), 9);
-        Assert.Equal(1500 * 2 * Math.PI / 60, d.Drives[1].Currents[0].Components[0].Omega, 9);
+        Assert.Equal(157.5, d.Drives[1].Currents[0].Components[0].Omega, 9); // rpm is a speed and refused here (WS4004)
     }
 
     [Fact]
