@@ -29,12 +29,14 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
         bool neutral = false, incomplete = false;
         ImmutableArray<int> sequence = [];
 
+        // Values first (statement order never changes meaning), then the currents.
+        foreach (var let in block.Body.OfType<LetSyntax>())
+            LetBinder.Bind(let, scope, evaluator, diagnostics, model);
         foreach (var statement in block.Body)
         {
             switch (statement)
             {
-                case LetSyntax let:
-                    LetBinder.Bind(let, scope, evaluator, diagnostics, model);
+                case LetSyntax:
                     break;
                 case FlagSyntax { Keyword.Text: Vocabulary.Neutral }:
                     neutral = true;

@@ -40,6 +40,14 @@ public class StatementOrderTests
     }
 
     [Fact]
+    public void A_drive_current_may_use_a_value_defined_below_it()
+    {
+        var d = Wind.Design("machine m {\n  slots 36\n  poles 4\n  phases U V W\n}\n" + Winding36 +
+                            "drive rated {\n  balanced sine i peak at 50 Hz sequence U V W\n  let i = 10 A\n}\n");
+        Assert.Equal(10, Assert.Single(d.Drives).Currents[0].Components[0].Peak, 12);
+    }
+
+    [Fact]
     public void A_let_may_still_use_only_the_lets_above_it()
     {
         var codes = Wind.Codes("machine m {\n  let a = b\n  let b = 2\n  slots a\n  poles 2\n  phases U\n}\n");
