@@ -120,46 +120,37 @@ public static class SweepCommand
 
     private static void WriteRecords(CliIO io, SweepSpec spec, SweepShard shard, Arguments a, Stream? file)
     {
-        var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
         var output = new RecordOutput(io, file);
         output.Write(SweepFormat.Create(a.Format, a.Orders).Header);
-        long done = 0;
-        OrderedBatches.Run(
-            SweepPlan.Shard(spec, shard), a.Threads, batchSize: 16, window: 8 * a.Threads,
-            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: SweepFormat.Create(a.Format, a.Orders)),
-            (state, candidate, buffer) =>
-            {
-                if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, buffer);
-            },
-            (bytes, count) =>
-            {
-                output.Write(bytes.Span);
-                done += count;
-                progress?.Report(done);
-            });
+        Evaluate(io, spec, shard, a.Threads, () => SweepFormat.Create(a.Format, a.Orders), bytes => output.Write(bytes.Span));
         output.Flush();
-        progress?.Finish();
     }
 
     private static void WriteParquet(CliIO io, SweepSpec spec, SweepShard shard, Arguments a, Stream file)
     {
-        var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
         var parquet = new SweepParquet(file, a.Orders);
+        Evaluate(io, spec, shard, a.Threads, () => new SweepParquet.Encoding(), bytes => parquet.Add(bytes.Span));
+        parquet.Finish();
+    }
+
+    /// <summary>Evaluates the shard on every thread, each record encoded by its thread's format, and hands the batches to <paramref name="write"/> in sweep order.</summary>
+    private static void Evaluate(CliIO io, SweepSpec spec, SweepShard shard, int threads, Func<SweepFormat> format, Action<ReadOnlyMemory<byte>> write)
+    {
+        var progress = io.ErrIsTerminal ? new ProgressBar(io.Err, SweepPlan.Count(spec, shard), "sweep") : null;
         long done = 0;
         OrderedBatches.Run(
-            SweepPlan.Shard(spec, shard), a.Threads, batchSize: 16, window: 8 * a.Threads,
-            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: new SweepParquet.Encoding()),
+            SweepPlan.Shard(spec, shard), threads, batchSize: 16, window: 8 * threads,
+            () => (Evaluator: new SweepEvaluator(spec), Record: new SweepRecord(), Format: format()),
             (state, candidate, buffer) =>
             {
                 if (state.Evaluator.TryEvaluate(candidate, state.Record)) state.Format.Write(state.Record, buffer);
             },
             (bytes, count) =>
             {
-                parquet.Add(bytes.Span);
+                write(bytes);
                 done += count;
                 progress?.Report(done);
             });
-        parquet.Finish();
         progress?.Finish();
     }
 
