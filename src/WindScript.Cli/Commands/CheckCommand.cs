@@ -11,14 +11,14 @@ public static class CheckCommand
     public static Command Create(CliIO io)
     {
         var files = CommonOptions.Files("Winding files to check");
-        var format = CommonOptions.Format("text", "text", "json", "sarif");
+        var format = CommonOptions.Format(OutputFormat.Text, OutputFormat.Text, OutputFormat.Json, OutputFormat.Sarif);
         var warningsAsErrors = new Option<bool>("--warnings-as-errors") { Description = "Fail (exit 1) on warnings too" };
         var command = new Command("check", "Check winding files and report problems with their exact place") { files, format, warningsAsErrors };
-        command.SetAction(parse => Run(io, parse.GetValue(files)!, parse.GetValue(format)!, parse.GetValue(warningsAsErrors)));
+        command.SetAction(parse => Run(io, parse.GetValue(files)!, OutputFormats.Parse(parse.GetValue(format)!), parse.GetValue(warningsAsErrors)));
         return command;
     }
 
-    public static int Run(CliIO io, string[] paths, string format, bool warningsAsErrors)
+    public static int Run(CliIO io, string[] paths, OutputFormat format, bool warningsAsErrors)
     {
         var results = new List<(InputFile File, Compilation Compilation)>();
         bool unreadable = false;
@@ -28,12 +28,12 @@ public static class CheckCommand
             results.Add((file, Compilation.Compile(file.Text, file.Path)));
         }
 
-        if (format == "sarif")
+        if (format == OutputFormat.Sarif)
         {
             string version = typeof(CheckCommand).Assembly.GetName().Version?.ToString(3) ?? "0.0.0";
             io.Out.WriteLine(DiagnosticJson.ToText(json => SarifWriter.Write(json, results.Select(r => (r.File.DisplayName, r.Compilation)), version)));
         }
-        else if (format == "json")
+        else if (format == OutputFormat.Json)
         {
             io.Out.WriteLine(DiagnosticJson.ToText(json =>
             {

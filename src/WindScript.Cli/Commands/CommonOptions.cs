@@ -1,4 +1,5 @@
 using System.CommandLine;
+using WindScript.Cli.Output;
 
 namespace WindScript.Cli.Commands;
 
@@ -16,14 +17,16 @@ public static class CommonOptions
         Description = description + " ('-' reads standard input)",
     };
 
-    public static Option<string> Format(string defaultValue, params string[] allowed)
+    /// <summary><c>--format</c> with the command's formats; read it with <see cref="OutputFormats.Parse"/>.</summary>
+    public static Option<string> Format(OutputFormat defaultValue, params OutputFormat[] allowed)
     {
+        var names = allowed.Select(OutputFormats.Name).ToArray();
         var option = new Option<string>("--format", "-f")
         {
-            Description = "Output format: " + string.Join(", ", allowed),
-            DefaultValueFactory = _ => defaultValue,
+            Description = "Output format: " + string.Join(", ", names),
+            DefaultValueFactory = _ => OutputFormats.Name(defaultValue),
         };
-        option.AcceptOnlyFromAmong(allowed);
+        option.AcceptOnlyFromAmong(names);
         return option;
     }
 }

@@ -24,13 +24,13 @@ public static class DiffCommand
             Description = "OLD NEW ('-' reads standard input, /dev/null stands for no file), or the arguments git passes to an external diff driver",
             Arity = new ArgumentArity(2, 9),
         };
-        var format = CommonOptions.Format("text", "text", "json");
+        var format = CommonOptions.Format(OutputFormat.Text, OutputFormat.Text, OutputFormat.Json);
         var command = new Command("diff", "Compare two winding files in physical terms: exit 0 when identical, 1 when they differ") { files, format };
-        command.SetAction(parse => Run(io, parse.GetValue(files)!, parse.GetValue(format)!));
+        command.SetAction(parse => Run(io, parse.GetValue(files)!, OutputFormats.Parse(parse.GetValue(format)!)));
         return command;
     }
 
-    public static int Run(CliIO io, string[] args, string format)
+    public static int Run(CliIO io, string[] args, OutputFormat format)
     {
         string oldPath, newPath, oldLabel, newLabel;
         bool git;
@@ -55,7 +55,7 @@ public static class DiffCommand
         }
         if (Read(io, oldPath, oldLabel) is not { } old || Read(io, newPath, newLabel) is not { } @new) return ExitCodes.Usage;
         var diff = WindingComparison.Compare(old, @new);
-        if (format == "json") DiffJson.Write(io.Out, diff);
+        if (format == OutputFormat.Json) DiffJson.Write(io.Out, diff);
         else DiffText.Write(io.Out, diff);
         if (git) return ExitCodes.Ok;
         return diff.Identical ? ExitCodes.Ok : ExitCodes.Findings;

@@ -14,7 +14,7 @@ public static class EvalCommand
     public static Command Create(CliIO io)
     {
         var file = CommonOptions.File("Winding file to evaluate");
-        var format = CommonOptions.Format("text", "text", "json", "csv");
+        var format = CommonOptions.Format(OutputFormat.Text, OutputFormat.Text, OutputFormat.Json, OutputFormat.Csv);
         var orders = new Option<int>("--orders")
         {
             Description = "Highest electrical order shown (harmonics n = v/p up to N)",
@@ -36,20 +36,20 @@ public static class EvalCommand
         {
             file, format, orders, at,
         };
-        command.SetAction(parse => Run(io, parse.GetValue(file)!, parse.GetValue(format)!, parse.GetValue(orders), parse.GetValue(at)!));
+        command.SetAction(parse => Run(io, parse.GetValue(file)!, OutputFormats.Parse(parse.GetValue(format)!), parse.GetValue(orders), parse.GetValue(at)!));
         return command;
     }
 
-    public static int Run(CliIO io, string path, string format = "text", int orders = 25, string at = "0")
+    public static int Run(CliIO io, string path, OutputFormat format = OutputFormat.Text, int orders = 25, string at = "0")
     {
         if (InputFile.Read(path, io.In, io.Err) is not { } input) return ExitCodes.Usage;
         var compilation = Compilation.Compile(input.Text, input.Path);
-        if (format == "text") DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
+        if (format == OutputFormat.Text) DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
         if (compilation.Design is not { } design)
         {
-            if (format != "text") DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
+            if (format != OutputFormat.Text) DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
             // A JSON consumer still gets a document: the diagnostics that say why there is nothing to evaluate.
-            if (format == "json")
+            if (format == OutputFormat.Json)
                 io.Out.WriteLine(DiagnosticJson.ToText(json =>
                 {
                     json.WriteStartObject();
@@ -74,10 +74,10 @@ public static class EvalCommand
         var result = MachineAnalysis.Evaluate(design, new AnalysisOptions { MaxElectricalOrder = orders, Time = time });
         switch (format)
         {
-            case "json":
+            case OutputFormat.Json:
                 io.Out.WriteLine(EvalJson.Write(input.DisplayName, compilation.Source, compilation.Diagnostics, result));
                 break;
-            case "csv":
+            case OutputFormat.Csv:
                 DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
                 EvalCsv.Write(io.Out, result);
                 break;

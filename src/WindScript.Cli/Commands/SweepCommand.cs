@@ -18,7 +18,7 @@ public static class SweepCommand
     public const int MaxThreads = 256;
 
     /// <summary>The command line as given, before it is checked.</summary>
-    public sealed record Arguments(string Slots, string Poles, string Phases, string Layers, string Pitch, int Orders, string Format,
+    public sealed record Arguments(string Slots, string Poles, string Phases, string Layers, string Pitch, int Orders, OutputFormat Format,
         string? Shard, int? Shards, string? Output, bool SkipExisting, int Threads);
 
     public static Command Create(CliIO io)
@@ -33,7 +33,7 @@ public static class SweepCommand
             DefaultValueFactory = _ => "pole",
         };
         var orders = new Option<int>("--orders") { Description = "Winding factors at electrical orders 1..N (as eval --orders; no short form, so it cannot be mistaken for synth -n, turns)", DefaultValueFactory = _ => 49 };
-        var format = CommonOptions.Format("jsonl", "jsonl", "csv", "parquet");
+        var format = CommonOptions.Format(OutputFormat.JsonLines, OutputFormat.JsonLines, OutputFormat.Csv, OutputFormat.Parquet);
         format.Description += " (parquet needs --output)";
         var shard = new Option<string?>("--shard")
         {
@@ -58,7 +58,7 @@ public static class SweepCommand
             slots, poles, phases, layers, pitch, orders, format, shard, shards, output, skipExisting, threads,
         };
         command.SetAction(parse => Run(io, new Arguments(parse.GetValue(slots)!, parse.GetValue(poles)!, parse.GetValue(phases)!, parse.GetValue(layers)!,
-            parse.GetValue(pitch)!, parse.GetValue(orders), parse.GetValue(format)!, parse.GetValue(shard), parse.GetValue(shards),
+            parse.GetValue(pitch)!, parse.GetValue(orders), OutputFormats.Parse(parse.GetValue(format)!), parse.GetValue(shard), parse.GetValue(shards),
             parse.GetValue(output), parse.GetValue(skipExisting), parse.GetValue(threads))));
         return command;
     }
@@ -77,7 +77,7 @@ public static class SweepCommand
         if (error is not null && !error.StartsWith("--", StringComparison.Ordinal)) error = "--shard: " + error;
         if (error is null && a.Threads is < 1 or > MaxThreads) error = $"--threads must be from 1 to {MaxThreads}, not {a.Threads}";
         if (error is null && a.SkipExisting && a.Output is null) error = "--skip-existing needs --output FILE";
-        if (error is null && a.Format == "parquet" && a.Output is null) error = "--format parquet writes a file: add --output FILE (e.g. -o sweep.parquet)";
+        if (error is null && a.Format == OutputFormat.Parquet && a.Output is null) error = "--format parquet writes a file: add --output FILE (e.g. -o sweep.parquet)";
         SweepSpec? spec = null;
         if (error is null)
         {
@@ -111,7 +111,7 @@ public static class SweepCommand
         }
         using (part)
         {
-            if (a.Format == "parquet") WriteParquet(io, spec, shard, a, part!.Stream);
+            if (a.Format == OutputFormat.Parquet) WriteParquet(io, spec, shard, a, part!.Stream);
             else WriteRecords(io, spec, shard, a, part?.Stream);
             part?.Commit();
         }

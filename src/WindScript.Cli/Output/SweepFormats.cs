@@ -1,3 +1,4 @@
+using WindScript.Cli.Output;
 using System.Buffers;
 using System.Buffers.Text;
 using System.Text;
@@ -13,9 +14,9 @@ namespace WindScript.Cli.Output;
 /// </summary>
 public abstract class SweepFormat
 {
-    public static SweepFormat Create(string name, int orders) => name switch
+    public static SweepFormat Create(OutputFormat format, int orders) => format switch
     {
-        "csv" => new SweepCsv(orders),
+        OutputFormat.Csv => new SweepCsv(orders),
         _ => new SweepJsonLines(),
     };
 
