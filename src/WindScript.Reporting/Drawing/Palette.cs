@@ -43,6 +43,9 @@ public static class Palette
         return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
     }
 
+    /// <summary>The tint of a return (negative) side: the phase colour halfway to white (kept apart from every other phase's go and return colours under colour-vision deficiencies, see PaletteVisionTests).</summary>
+    public static string ReturnTint(string color) => Tint(color, 0.5);
+
     /// <summary>The diverging field scale at v in [-1, 1]: purple through white to green.</summary>
     public static string Diverging(double v)
     {

@@ -25,7 +25,7 @@ public static class LayoutPlot
         // Slot numbers.
         int every = Math.Max(1, (int)Math.Ceiling(20 / cell));
         for (int slot = 1; slot <= q; slot++)
-            if ((slot - 1) % every == 0) s.Text(left + (slot - 0.5) * cell, top - 8, slot.ToString(CultureInfo.InvariantCulture), 10, Palette.Muted, Anchor.Middle);
+            if ((slot - 1) % every == 0) s.Text(left + (slot - 0.5) * cell, top - 12, slot.ToString(CultureInfo.InvariantCulture), 10, Palette.Muted, Anchor.Middle);
 
         string[] names = layers == 1 ? ["slot"] : ["top", "bottom"];
         for (int layer = 0; layer < layers; layer++)
@@ -40,7 +40,10 @@ public static class LayoutPlot
         for (int pole = 0; pole <= d.Poles; pole++)
         {
             double x = left + pole * polePitch * cell;
-            s.Line(x, top - 4, x, stripBottom + 4, new Stroke(Palette.Ink, 1.2, [4, 3]));
+            // Marked above and below the strip only: a pole boundary inside a slot must not cross
+            // the cell's sign (a struck-through "−V" reads as "+V").
+            s.Line(x, top - 8, x, top - 1, new Stroke(Palette.Ink, 1.6));
+            s.Line(x, stripBottom + 1, x, stripBottom + 8, new Stroke(Palette.Ink, 1.6));
             if (pole < d.Poles && polePitch * cell > 34)
                 s.Text(x + polePitch * cell / 2, stripBottom + 16, $"pole {pole + 1}", 10, Palette.Muted, Anchor.Middle);
         }
@@ -52,37 +55,43 @@ public static class LayoutPlot
             int span = coil.PitchSlots(q);
             return span > q / 2.0 ? span - q : span;   // the shorter way round
         }
+        // One lane per phase, so the coils of a lap winding do not mesh with the other phases'.
+        int m = Math.Max(1, d.Phases.Length);
+        double lane = (arcBand - 8) / m;
         int widest = Math.Max(1, d.Winding.Coils.Select(c => Math.Abs(Span(c, q))).DefaultIfEmpty(1).Max());
-        double rise = Math.Min((arcBand - 16) / widest, 0.5 * cell);   // pixels of height per slot of span
+        double rise = Math.Min((lane - 6) / widest, 0.5 * cell);   // pixels of height per slot of span
+        foreach (var phase in d.Phases)
+            s.Text(left - 8, arcTop + phase.Index * lane + Math.Min(lane, 12) - 1, phase.Name, 10, Palette.Phase(phase.Index), Anchor.End);
         foreach (var coil in d.Winding.Coils)
         {
             int span = Span(coil, q);
             if (span == 0) continue;
             // Arc height grows with the span, so concentric coils nest visibly.
-            double x0 = left + (coil.GoSlot - 0.5) * cell, height = 10 + rise * Math.Abs(span);
+            double x0 = left + (coil.GoSlot - 0.5) * cell, height = 2 + rise * Math.Abs(span);
+            double laneTop = arcTop + Math.Clamp(coil.Phase, 0, m - 1) * lane;
             var color = coil.Phase < d.Phases.Length ? Palette.Phase(coil.Phase) : Palette.Muted;
             var points = Enumerable.Range(0, 25).Select(i =>
             {
                 double t = i / 24.0;
                 double x = x0 + span * cell * t;
-                return new Point(x, arcTop + height * Math.Sin(Math.PI * t));
+                return new Point(x, laneTop + height * Math.Sin(Math.PI * t));
             }).ToList();
             // A coil that runs past either end of the strip continues at the other end (the strip is a ring).
             foreach (var piece in Wrap(points, left, stripRight))
                 s.Polyline(piece, new Stroke(color, 1.2));
         }
-        s.Text(left, arcTop + arcBand + 4, "coils (end connections, go side to return side)", 10, Palette.Muted);
+        s.Text(left, arcTop + arcBand + 4, "coils (end connections, go side to return side), one lane per phase", 10, Palette.Muted);
 
         // Legend.
         double lx = left, ly = s.Height - 18;
         foreach (var phase in d.Phases)
         {
             s.Rect(lx, ly - 10, 14, 12, Palette.Phase(phase.Index));
-            s.Rect(lx + 16, ly - 10, 14, 12, Palette.Tint(Palette.Phase(phase.Index), 0.6), new Stroke(Palette.Phase(phase.Index), 1));
+            s.Rect(lx + 16, ly - 10, 14, 12, Palette.ReturnTint(Palette.Phase(phase.Index)), new Stroke(Palette.Phase(phase.Index), 1));
             s.Text(lx + 36, ly, phase.Name, 11);
             lx += 46 + Scene.TextWidth(phase.Name, 11);
         }
-        s.Text(lx + 10, ly, "solid: go side (+), light: return side (−); dashed lines: pole pitches", 11, Palette.Muted);
+        s.Text(lx + 10, ly, "solid: go (+), light: return (−); ticks: pole boundaries", 11, Palette.Muted);
         return s;
     }
 
@@ -98,13 +107,16 @@ public static class LayoutPlot
         {
             var c = cells[i];
             string color = c.Phase < phases.Count ? Palette.Phase(c.Phase) : Palette.Muted;
-            string fill = c.Sign > 0 ? color : Palette.Tint(color, 0.6);
+            string fill = c.Sign > 0 ? color : Palette.ReturnTint(color);
             double cy = y + i * part;
             s.Rect(x, cy, w, part, fill, new Stroke(c.Sign > 0 ? Palette.Paper : color, 1));
             string name = c.Phase < phases.Count ? phases[c.Phase].Name : "?";
             string sign = c.Sign > 0 ? "+" : "−";
-            string text = w >= 12 + Scene.TextWidth(name, 11) ? sign + name : w >= 9 ? sign : "";
-            if (text.Length > 0) s.Label(x + w / 2, cy + part / 2, text, Math.Min(11, part * 0.6), Palette.TextOn(fill), Anchor.Middle, bold: c.Sign > 0);
+            // The sign and the phase name both, shrunk to fit the cell (bold text runs ~15 % wider).
+            string text = sign + name;
+            double size = Math.Min(Math.Min(11, part * 0.6), 11 * (w - 4) / (1.15 * Scene.TextWidth(text, 11)));
+            if (size < 6) { text = sign; size = Math.Min(11, part * 0.6); }
+            if (w >= 6) s.Label(x + w / 2, cy + part / 2, text, size, Palette.TextOn(fill), Anchor.Middle, bold: c.Sign > 0);
         }
     }
 

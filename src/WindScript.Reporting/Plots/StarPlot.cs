@@ -30,13 +30,15 @@ public static class StarPlot
         foreach (var coincident in groups)
         {
             int index = 0;
-            foreach (var same in coincident.GroupBy(slot => Style(layout, slot)))
+            foreach (var same in coincident.GroupBy(slot => Style(layout, slot, d)))
             {
-                var (color, negative) = same.Key;
+                var (color, negative, phaseName) = same.Key;
                 double angle = Angle(same.First(), q, p), length = radius * (1 - 0.12 * index++);
                 s.Arrow(new Point(cx, cy), Polar(cx, cy, length, angle), color, 1.4, 7, negative ? [5, 3] : null);
-                var label = Polar(cx, cy, length + 16, angle);
-                s.Label(label.X, label.Y, string.Join(",", same.Select(n => n.ToString(CultureInfo.InvariantCulture))), 10, color);
+                // The label names the phase and sign, so a spoke reads without its colour.
+                var label = Polar(cx, cy, length + 22, angle);
+                string tag = phaseName.Length == 0 ? "" : $" {(negative ? "−" : "+")}{phaseName}";
+                s.Label(label.X, label.Y, string.Join(",", same.Select(n => n.ToString(CultureInfo.InvariantCulture))) + tag, 10, color);
             }
         }
 
@@ -61,15 +63,15 @@ public static class StarPlot
                 s.Label(label.X, label.Y, phase.Name, 13, Palette.Phase(phase.Index), bold: true);
             }
 
-        s.Text(20, 628, "solid: go side (+) in the top layer; dashed: return side (−); thick: phase resultant", 11, Palette.Muted);
+        s.Text(20, 628, "labels: slots, phase and sign of the top-layer side; dashed: return side (−); thick: phase resultant", 11, Palette.Muted);
         return s;
     }
 
     /// <summary>Colour and sign of a slot's top-layer side (the bottom layer's for a slot with no top side).</summary>
-    private static (string Color, bool Negative) Style(SlotLayout layout, int slot)
+    private static (string Color, bool Negative, string Phase) Style(SlotLayout layout, int slot, WindingDesign d)
     {
         var cells = layout[slot, 0].Count > 0 ? layout[slot, 0] : layout.Layers > 1 ? layout[slot, 1] : [];
-        return cells.Count == 0 ? (Palette.Muted, false) : (Palette.Phase(cells[0].Phase), cells[0].Sign < 0);
+        return cells.Count == 0 ? (Palette.Muted, false, "") : (Palette.Phase(cells[0].Phase), cells[0].Sign < 0, d.Phases[cells[0].Phase].Name);
     }
 
     /// <summary>Electrical angle of slot s (1-based) from slot 1, in radians.</summary>
