@@ -51,6 +51,7 @@ public sealed class Compilation
             // An error inside a drive cannot change the winding: it does not hold the winding checks back.
             all.AddRange(Checking.Checker.Check(design, syntax,
                 sourceHasErrors: all.Any(d => d.Severity == Severity.Error && !design.Drives.Any(drive => drive.Span.Contains(d.Span)))));
+        all = DiagnosticFlood.Collapse(all);
         all.Sort((a, b) => a.Span.Start != b.Span.Start ? a.Span.Start.CompareTo(b.Span.Start) : string.CompareOrdinal(a.Code, b.Code));
         return new Compilation(syntax, semantics, all);
     }

@@ -48,6 +48,15 @@ public static class EvalCommand
         if (compilation.Design is not { } design)
         {
             if (format != OutputFormat.Text) DiagnosticText.Write(io.Err, input.DisplayName, compilation.Source, compilation.Diagnostics);
+            // A JSON consumer still gets a document: the diagnostics that say why there is nothing to evaluate.
+            if (format == OutputFormat.Json)
+                io.Out.WriteLine(DiagnosticJson.ToText(json =>
+                {
+                    json.WriteStartObject();
+                    json.WritePropertyName("diagnostics");
+                    DiagnosticJson.WriteArray(json, input.DisplayName, compilation.Source, compilation.Diagnostics);
+                    json.WriteEndObject();
+                }));
             io.Err.WriteLine($"{input.DisplayName}: cannot evaluate: the file does not describe a complete machine and winding");
             return ExitCodes.Findings;
         }

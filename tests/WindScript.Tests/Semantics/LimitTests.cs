@@ -146,3 +146,33 @@ public sealed class LimitTests
         }
     }
 }
+
+/// <summary>Issue 13, findings 5 and 9: floods of identical diagnostics, and eval's JSON for a file it cannot evaluate.</summary>
+public sealed class FloodTests
+{
+    [Fact]
+    public void The_same_mistake_in_nested_loops_is_reported_once_with_its_count()
+    {
+        var text = File.ReadAllText(Path.Combine(Repo.Cases, "flood_in_nested_loops.wind"));
+        var c = Compilation.Compile(text);
+        var d = Assert.Single(c.Diagnostics, x => x.Severity == WindScript.Diagnostics.Severity.Error);
+        Assert.EndsWith("(999,000 times here)", d.Message);
+    }
+
+    [Fact]
+    public void Check_of_the_flood_prints_one_line_per_place()
+    {
+        var r = CliRunner.Run("check", Path.Combine(Repo.Cases, "flood_in_nested_loops.wind"));
+        Assert.Equal(1, r.Exit);
+        Assert.True(r.Out.Split('\n', StringSplitOptions.RemoveEmptyEntries).Length < 10, r.Out);
+    }
+
+    [Fact]
+    public void Eval_json_of_an_incomplete_file_is_a_document_with_its_diagnostics()
+    {
+        var r = CliRunner.RunWithInput("machine m {\n  slots 12\n}\n", "eval", "-", "--format", "json");
+        Assert.Equal(1, r.Exit);
+        using var doc = JsonDocument.Parse(r.Out);
+        Assert.NotEmpty(doc.RootElement.GetProperty("diagnostics").EnumerateArray());
+    }
+}
