@@ -35,7 +35,7 @@ fi
 
 echo "== native binary (build/native.sh) at $((SECONDS - started)) s"
 build/native.sh "$work/native" >"$work/native.out" 2>"$work/native.err"; exe=$(tail -1 "$work/native.out")
-if [ ! -x "$exe" ]; then tail -30 "$work/native.out" "$work/native.err"; fail "build/native.sh"; finish; fi
+if [ ! -x "$exe" ]; then tail -n 30 "$work/native.out" "$work/native.err"; fail "build/native.sh"; finish; fi
 pass "build/native.sh built $(basename "$exe") ($(du -h "$exe" | cut -f1)) with $(ls "$work/native" | tr '\n' ' ')"
 commit=$(git rev-parse --short=12 HEAD 2>/dev/null || echo unknown)
 version=$("$exe" --version)

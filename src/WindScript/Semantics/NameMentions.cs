@@ -1,4 +1,5 @@
 using System.Collections;
+using System.Diagnostics.CodeAnalysis;
 using System.Reflection;
 using WindScript.Syntax;
 
@@ -19,6 +20,9 @@ internal static class NameMentions
         return names;
     }
 
+    // Reflection over the syntax records: the CLI roots the core assembly for trimming
+    // (TrimmerRootAssembly), so every property is there in the Native AOT binary too.
+    [UnconditionalSuppressMessage("Trimming", "IL2075", Justification = "WindScript.Core is a trimmer root assembly of every published binary.")]
     private static void Walk(object? node, HashSet<string> names)
     {
         switch (node)
