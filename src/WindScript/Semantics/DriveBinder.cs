@@ -131,10 +131,10 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
     /// 'rpm' measures a rotor speed, not how often a current alternates: "at 750 rpm" is refused,
     /// with the synchronous frequency f = n·p/60 at the machine's pole pairs (common practice).
     /// </summary>
-    private bool SpeedWrittenAsFrequency(ExpressionSyntax frequency)
+    private bool SpeedWrittenAsFrequency(ExpressionSyntax frequency, Scope scope)
     {
         var literal = frequency as NumberSyntax ?? (frequency as ParenthesizedExpressionSyntax)?.Inner as NumberSyntax;
-        bool hasRpm = literal is { Unit.Text: "rpm" } || Mentions(frequency, "rpm");
+        bool hasRpm = literal is { Unit.Text: "rpm" } || Mentions(frequency, "rpm", scope, 0);
         if (!hasRpm) return false;
         if (literal is { Unit.Text: "rpm" } n && polePairs is { } p and > 0)
         {
@@ -152,13 +152,17 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
         return true;
     }
 
-    private static bool Mentions(ExpressionSyntax e, string unit) => e switch
+    // Follows names to the 'let' they were written with, so `let n = 750 rpm` then `at n` is
+    // caught too (a let refers only to lets above it, so this ends; the depth bound is a guard).
+    private static bool Mentions(ExpressionSyntax e, string unit, Scope scope, int depth) => depth < 100 && e switch
     {
         NumberSyntax n => n.Unit?.Text == unit,
-        ParenthesizedExpressionSyntax paren => Mentions(paren.Inner, unit),
-        UnaryExpressionSyntax u => Mentions(u.Operand, unit),
-        BinaryExpressionSyntax b => Mentions(b.Left, unit) || Mentions(b.Right, unit),
-        CallExpressionSyntax call => call.Arguments.Any(a => Mentions(a, unit)),
+        NameExpressionSyntax name => scope.Lookup(name.Name.Text) is { Kind: SymbolKind.Value, Expression: { } written }
+            && Mentions(written, unit, scope, depth + 1),
+        ParenthesizedExpressionSyntax paren => Mentions(paren.Inner, unit, scope, depth + 1),
+        UnaryExpressionSyntax u => Mentions(u.Operand, unit, scope, depth + 1),
+        BinaryExpressionSyntax b => Mentions(b.Left, unit, scope, depth + 1) || Mentions(b.Right, unit, scope, depth + 1),
+        CallExpressionSyntax call => call.Arguments.Any(a => Mentions(a, unit, scope, depth + 1)),
         _ => false,
     };
 
@@ -171,7 +175,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     ? new CurrentComponent(i, 0, 0, dc.Span) : null;
             case SineTermSyntax sine:
                 var amplitude = evaluator.EvaluateAs(sine.Amplitude, scope, Dimension.CurrentDim, "a current amplitude");
-                if (SpeedWrittenAsFrequency(sine.Frequency)) return null;
+                if (SpeedWrittenAsFrequency(sine.Frequency, scope)) return null;
                 var omega = evaluator.EvaluateAs(sine.Frequency, scope, Dimension.AngularFrequency, "a frequency");
                 double phase = 0;
                 if (sine.Phase is { } p)

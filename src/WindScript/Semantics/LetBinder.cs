@@ -18,6 +18,7 @@ internal static class LetBinder
         // Inside a loop the same 'let' binds once per pass: keep one symbol per definition.
         var symbol = model.Define(let.Name.Text, SymbolKind.Value, let.Name.Span);
         symbol.Value = value;
+        symbol.Expression = let.Value;
         scope.TryDeclare(symbol);
     }
 }

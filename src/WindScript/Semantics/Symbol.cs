@@ -27,6 +27,9 @@ internal sealed class Symbol(string name, SymbolKind kind, TextSpan definition)
     /// <summary>The evaluated value of a 'let' (null for other kinds, or when it did not evaluate).</summary>
     public Quantity? Value { get; internal set; }
 
+    /// <summary>The expression a 'let' was written with (null for other kinds): lets a check see the units it used.</summary>
+    public Syntax.ExpressionSyntax? Expression { get; internal set; }
+
     public IReadOnlyList<TextSpan> References => _references;
 
     internal bool Used => _references.Count > 0;

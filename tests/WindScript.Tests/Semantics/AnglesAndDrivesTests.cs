@@ -63,6 +63,17 @@ public class AnglesAndDrivesTests
         Assert.Equal("Write 50 Hz", d.Fix?.Title);
     }
 
+    // The same trap through a named value: the speed is found in the let the name was written with.
+    [Theory]
+    [InlineData("let n = 1500 rpm\n", "n")]
+    [InlineData("let n = 1500 rpm\nlet shaft = n\n", "(shaft * 1)")]
+    public void A_speed_given_through_a_let_is_refused_as_a_frequency(string lets, string frequency)
+    {
+        var c = Wind.Compile(lets + With("", $"drive d {{\n  balanced sine 10 A rms at {frequency} sequence U V W\n}}\n"));
+        Assert.Single(c.Diagnostics, x => x.Code == "WS4004");
+        Assert.DoesNotContain(Wind.Compile(With("", "drive d {\n  balanced sine 10 A rms at 50 Hz sequence U V W\n}\n")).Diagnostics, x => x.Code == "WS4004");
+    }
+
     [Fact]
     public void Two_balanced_lines_equal_the_per_phase_currents_written_by_hand()
     {
