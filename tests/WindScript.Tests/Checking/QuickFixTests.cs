@@ -9,12 +9,7 @@ namespace WindScript.Tests.Checking;
 /// </summary>
 public class QuickFixTests
 {
-    public static TheoryData<string> Files()
-    {
-        var data = new TheoryData<string>();
-        foreach (var f in Repo.ExampleFiles().Concat(Repo.CaseFiles())) data.Add(Path.GetRelativePath(Repo.Root, f));
-        return data;
-    }
+    public static TheoryData<string> Files() => Repo.ExamplesAndCases();
 
     [Theory]
     [MemberData(nameof(Files))]

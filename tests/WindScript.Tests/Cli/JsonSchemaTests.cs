@@ -12,12 +12,7 @@ namespace WindScript.Tests.Cli;
 /// </summary>
 public class JsonSchemaTests
 {
-    public static TheoryData<string> Inputs()
-    {
-        var data = new TheoryData<string>();
-        foreach (var f in Repo.ExampleFiles().Concat(Repo.CaseFiles())) data.Add(Path.GetRelativePath(Repo.Root, f));
-        return data;
-    }
+    public static TheoryData<string> Inputs() => Repo.ExamplesAndCases();
 
     [Fact]
     public void Every_output_has_a_schema_and_every_schema_closes_its_objects()

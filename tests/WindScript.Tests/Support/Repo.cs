@@ -15,6 +15,14 @@ public static class Repo
 
     public static IEnumerable<string> CaseFiles() => Directory.EnumerateFiles(Cases, "*.wind").Order(StringComparer.Ordinal);
 
+    /// <summary>Every example and test case, as paths relative to the repository root (theory data).</summary>
+    public static TheoryData<string> ExamplesAndCases()
+    {
+        var data = new TheoryData<string>();
+        foreach (var f in ExampleFiles().Concat(CaseFiles())) data.Add(Path.GetRelativePath(Root, f));
+        return data;
+    }
+
     private static string FindRoot()
     {
         var dir = new DirectoryInfo(AppContext.BaseDirectory);

@@ -14,12 +14,7 @@ public class GrammarStructureTests
 {
     private static readonly Ebnf Grammar = Ebnf.Read(File.ReadAllText(Path.Combine(Repo.Root, "grammar", "windscript.ebnf")));
 
-    public static TheoryData<string> Files()
-    {
-        var data = new TheoryData<string>();
-        foreach (var f in Repo.ExampleFiles().Concat(Repo.CaseFiles())) data.Add(Path.GetRelativePath(Repo.Root, f));
-        return data;
-    }
+    public static TheoryData<string> Files() => Repo.ExamplesAndCases();
 
     [Theory]
     [MemberData(nameof(Files))]
