@@ -31,6 +31,14 @@ public static class ExplainCommand
         io.Out.WriteLine($"{entry.Code}: {entry.Title} ({DiagnosticText.SeverityName(entry.Severity)})");
         io.Out.WriteLine();
         foreach (var line in Wrap(string.Join(" ", entry.Explanation.Split('\n').Select(l => l.Trim())), 92)) io.Out.WriteLine(line);
+        var cited = References.Cited(entry.Explanation);
+        if (cited.Count > 0)
+        {
+            io.Out.WriteLine();
+            io.Out.WriteLine("References:");
+            foreach (var work in cited)
+                foreach (var (line, first) in Wrap(work, 88).Select((l, i) => (l, i == 0))) io.Out.WriteLine((first ? "  - " : "    ") + line);
+        }
         return ExitCodes.Ok;
     }
 

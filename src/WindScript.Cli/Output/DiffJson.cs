@@ -27,6 +27,9 @@ public static class DiffJson
         foreach (var r in d.Names) Text(json, r);
         json.WriteEndArray();
         Figures(json, "machine", d.Machine);
+        json.WriteStartArray("machineChoices");
+        foreach (var r in d.MachineChoices) Text(json, r);
+        json.WriteEndArray();
 
         json.WriteStartObject("slots");
         json.WriteString("note", d.SlotNote);

@@ -48,8 +48,16 @@ public static class DiffText
     private static void WriteMachine(TextWriter o, WindingDiff d)
     {
         var changed = d.Machine.Where(r => r.Changed).ToList();
+        var choices = d.MachineChoices.Where(r => r.Changed).ToList();
         if (changed.Count > 0) WriteFigures(o, "machine", changed, all: false);
-        else { o.WriteLine(); o.WriteLine("  machine: unchanged"); }
+        if (choices.Count > 0)
+        {
+            o.WriteLine();
+            var table = new TextTable(changed.Count > 0 ? "machine (arrangement)" : "machine", "old", "new");
+            foreach (var r in choices) table.Add("~", r.Name, r.Old ?? "-", r.New ?? "-");
+            table.Write(o);
+        }
+        if (changed.Count == 0 && choices.Count == 0) { o.WriteLine(); o.WriteLine("  machine: unchanged"); }
     }
 
     private static void WriteSlots(TextWriter o, WindingDiff d)

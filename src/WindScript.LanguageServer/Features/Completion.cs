@@ -76,6 +76,13 @@ public static class Completion
             Expression(x, c, offset, items, units);
             return;
         }
+        if (Vocabulary.Property(x.First) is { Value: ValueKind.Word, Words: { } words } wordProperty)
+        {
+            // A property that takes a word (rotor inside|outside): offer the words, once.
+            if (x.Statement.Count == 1 || (x.Statement.Count == 2 && last.Kind == TokenKind.Word && last.Span.End >= offset))
+                foreach (var w in words) items.Add(Item(w, Lsp.CompletionItemKind.EnumMember, $"{wordProperty.Word} {w}"));
+            return;
+        }
         switch (x.First)
         {
             case Vocabulary.Let:

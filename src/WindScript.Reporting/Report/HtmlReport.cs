@@ -112,6 +112,7 @@ public static class HtmlReport
             ("machine", d.Name), ("phases", string.Join(" ", d.Phases.Select(p => p.Name))),
             ("slots per pole per phase q", FigureFormat.Number(a.Machine.SlotsPerPolePerPhase)),
             .. FigureTables.Machine(null, d).Where(r => r.New is not null).Select(r => (r.Name, Value(r.New, r.Unit))),
+            .. FigureTables.MachineChoices(null, d).Select(r => (r.Name, r.New!)),
         ]);
         var pitches = d.Winding.Coils.Select(c => c.PitchSlots(d.Slots)).Distinct().Order().Select(x => x.ToString(CultureInfo.InvariantCulture));
         Table(o, "Winding", [

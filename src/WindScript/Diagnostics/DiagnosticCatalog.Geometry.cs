@@ -8,7 +8,7 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor SlotOpeningTooWide = new(
         "WS5002", Severity.Error, "Slot opening not smaller than the slot pitch",
-        "The slot pitch at the bore is π·D/Q; a slot opening at least that wide leaves no tooth tip between slots. Carter's coefficient (F. W. Carter, 1901; Pyrhonen et al., ch. 3) is then meaningless.");
+        "The slot pitch at the bore is π·D/Q; a slot opening at least that wide leaves no tooth tip between slots. Carter's coefficient is then meaningless. Sources: Carter 1901; Pyrhonen et al. 2014, ch. 3 (Carter coefficient).");
 
     public static readonly DiagnosticDescriptor RadiiDisagree = new(
         "WS5003", Severity.Error, "Rotor radius, bore and gap disagree",
@@ -20,5 +20,5 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor RotorOnWrongSide = new(
         "WS5005", Severity.Error, "Rotor radius on the wrong side of the stator",
-        "With the rotor inside, the rotor's gap surface lies inside the bore, so 'rotor_radius' must be smaller than half the bore; with 'rotor outside' it lies outside the stator's slotted surface and must be larger. A rotor radius on the wrong side usually means an outer-rotor machine that does not say 'rotor outside', or a diameter given as a radius. The radial gap is the difference of the two radii (common practice; the gap geometry of inner- and outer-rotor machines as in Pyrhonen et al., Design of Rotating Electrical Machines, ch. 3).");
+        "With the rotor inside, the rotor's gap surface lies inside the bore, so 'rotor_radius' must be smaller than half the bore; with 'rotor outside' it lies outside the stator's slotted surface and must be larger. A rotor radius on the wrong side usually means an outer-rotor machine that does not say 'rotor outside', or a diameter given as a radius. The radial gap is the difference of the two radii. Sources: common practice; Pyrhonen et al. 2014, ch. 3 (gap geometry of inner- and outer-rotor machines).");
 }

@@ -20,7 +20,7 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor SeriesTurnsMismatch = new(
         "WS3005", Severity.Error, "Declared series turns disagree with the coils",
-        "The winding declares 'series_turns N', but the coils give a different number of series turns per phase: N_ph = (sum of the turns of the phase's coils) / (parallel paths). For a double-layer winding of Q coils of N_c turns this is Q·N_c/(m·a) (common practice). The declared value is what nameplate, EMF and inductance estimates use, so it must match the coils.");
+        "The winding declares 'series_turns N', but the coils give a different number of series turns per phase: N_ph = (sum of the turns of the phase's coils) / (parallel paths). For a double-layer winding of Q coils of N_c turns this is Q·N_c/(m·a). The declared value is what nameplate, EMF and inductance estimates use, so it must match the coils. Sources: common practice.");
 
     public static readonly DiagnosticDescriptor PathsDoNotDivideCoils = new(
         "WS3006", Severity.Error, "Parallel paths do not divide the coils",
@@ -28,7 +28,7 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor PathsUnequalEmf = new(
         "WS3007", Severity.Error, "Parallel paths would carry circulating currents",
-        "Parallel paths must have equal EMF phasors, at every harmonic, or currents circulate between them and heat the winding. That needs the phase to consist of a identical sections: the number of parallel paths must divide the winding's periodicity t_w (the number of identical repeats of the layout around the bore), or 2·t_w when the layout also repeats reversed every half period (Pyrhonen, Jokinen, Hrabovcova, Design of Rotating Electrical Machines, 2nd ed., ch. 2: the maximum number of parallel paths).");
+        "Parallel paths must have equal EMF phasors, at every harmonic, or currents circulate between them and heat the winding. That needs the phase to consist of a identical sections: the number of parallel paths must divide the winding's periodicity t_w (the number of identical repeats of the layout around the bore), or 2·t_w when the layout also repeats reversed every half period. Sources: Pyrhonen et al. 2014, ch. 2 (the largest number of parallel paths).");
 
     public static readonly DiagnosticDescriptor UnequalSeriesTurns = new(
         "WS3008", Severity.Error, "Phases have unequal series turns",
@@ -36,15 +36,15 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor UnequalWindingFactors = new(
         "WS3009", Severity.Error, "Phases have unequal fundamental winding factors",
-        "The fundamental winding factor k_w1 = |sum of the coil-side phasors| / (number of conductors) measures how well a phase's conductors add up at the working order p. Phases with different k_w1 have different EMFs and MMF amplitudes: the winding is unbalanced (Pyrhonen et al., ch. 2).");
+        "The fundamental winding factor k_w1 = |sum of the coil-side phasors| / (number of conductors) measures how well a phase's conductors add up at the working order p. Phases with different k_w1 have different EMFs and MMF amplitudes: the winding is unbalanced. Sources: Pyrhonen et al. 2014, ch. 2 (winding factors).");
 
     public static readonly DiagnosticDescriptor AxesNotEvenlySpaced = new(
         "WS3010", Severity.Error, "Phase axes are not evenly spaced",
-        "The magnetic axes of the phases (where each phase's fundamental turns function peaks) must lie the phase shift apart — 360/m electrical degrees unless the machine says otherwise — for balanced currents to produce a pure forward-rotating field (Fitzgerald, Kingsley, Umans, Electric Machinery: rotating MMF of a polyphase winding).");
+        "The magnetic axes of the phases (where each phase's fundamental turns function peaks) must lie the phase shift apart — 360/m electrical degrees unless the machine says otherwise — for balanced currents to produce a pure forward-rotating field. Sources: Fitzgerald et al. 2003, ch. 4 (rotating MMF of a polyphase winding).");
 
     public static readonly DiagnosticDescriptor SubHarmonics = new(
         "WS3012", Severity.Info, "Sub-harmonic MMF waves",
-        "The air-gap MMF contains waves with fewer pole pairs than the working wave (mechanical order below p). This is a property of many fractional-slot windings (e.g. 12 slots, 10 poles), legal but noteworthy: sub-harmonics travel at high speed relative to the rotor and induce rotor and magnet eddy-current losses, and add differential leakage (Pyrhonen et al., ch. 2 and 4).");
+        "The air-gap MMF contains waves with fewer pole pairs than the working wave (mechanical order below p). This is a property of many fractional-slot windings (e.g. 12 slots, 10 poles), legal but noteworthy: sub-harmonics travel at high speed relative to the rotor and induce rotor and magnet eddy-current losses, and add differential leakage. Sources: Pyrhonen et al. 2014, ch. 2 and 4 (space harmonics, differential leakage).");
 
     public static readonly DiagnosticDescriptor EvenHarmonics = new(
         "WS3013", Severity.Info, "Even-order MMF harmonics",
@@ -64,13 +64,13 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor PhaseNotWound = new(
         "WS3017", Severity.Error, "A declared phase has no coils",
-        "Every phase the machine declares must be wound: a phase without coils carries no current and makes no field, so the machine runs as an unbalanced winding of the remaining phases (or not at all). Usually a group or a pattern line was left out, or a phase name was mistyped in the coils. A symmetric m-phase winding has m identical phases shifted by the phase shift (Pyrhonen, Jokinen, Hrabovcova, Design of Rotating Electrical Machines, 2nd ed., ch. 2).");
+        "Every phase the machine declares must be wound: a phase without coils carries no current and makes no field, so the machine runs as an unbalanced winding of the remaining phases (or not at all). Usually a group or a pattern line was left out, or a phase name was mistyped in the coils. A symmetric m-phase winding has m identical phases shifted by the phase shift. Sources: Pyrhonen et al. 2014, ch. 2 (symmetric windings).");
 
     public static readonly DiagnosticDescriptor NoWorkingWave = new(
         "WS3018", Severity.Error, "No working wave at the declared pole count",
-        "A winding for 2p poles must make an air-gap wave at mechanical order p (p pole pairs). Its winding factor there, k_w = |sum of the coil-side phasors at order p| / (number of conductors), is zero when the phases' conductors cancel at that order: the winding then works, if at all, as a machine of another pole count and will not run as declared. The message names the order with the largest winding factor, where the layout does work. The classic cause is a slot pattern with every '-' forgotten: all coil sides of a phase carry the same sign, and the layout repeats every pole pair instead of every pole, doubling the working pole count (Pyrhonen et al., ch. 2: winding factors and space harmonics).");
+        "A winding for 2p poles must make an air-gap wave at mechanical order p (p pole pairs). Its winding factor there, k_w = |sum of the coil-side phasors at order p| / (number of conductors), is zero when the phases' conductors cancel at that order: the winding then works, if at all, as a machine of another pole count and will not run as declared. The message names the order with the largest winding factor, where the layout does work. The classic cause is a slot pattern with every '-' forgotten: all coil sides of a phase carry the same sign, and the layout repeats every pole pair instead of every pole, doubling the working pole count. Sources: Pyrhonen et al. 2014, ch. 2 (winding factors and space harmonics).");
 
     public static readonly DiagnosticDescriptor DeclaredPitchContradicted = new(
         "WS3019", Severity.Warning, "Declared pitch contradicted by the coils",
-        "The winding declares 'pitch y slots', but some of its explicit coils span a different number of slots (counted the short way round the bore). The declaration is what a reader, the closed-form pitch factor k_p = sin(y/tau * pi/2) and the slot patterns take for the winding (Pyrhonen et al., ch. 2), so it must agree with the coils: correct the coils or the declaration. Coils of a group are judged by the group's own pitch.");
+        "The winding declares 'pitch y slots', but some of its explicit coils span a different number of slots (counted the short way round the bore). The declaration is what a reader, the closed-form pitch factor k_p = sin(y/tau * pi/2) and the slot patterns take for the winding, so it must agree with the coils: correct the coils or the declaration. Coils of a group are judged by the group's own pitch. Sources: Pyrhonen et al. 2014, ch. 2 (pitch factor).");
 }

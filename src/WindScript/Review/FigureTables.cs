@@ -28,7 +28,6 @@ internal static class FigureTables
             Row("layers", a, b, d => d.Winding.Layers),
             Row("parallel paths", a, b, d => d.Winding.Paths),
             Row("coils", a, b, d => d.Winding.Coils.Length),
-            Row("rotor outside (1 = yes)", a, b, d => d.Geometry.RotorOutside ? 1 : 0),
             Row("bore diameter", a, b, d => Mm(d.Geometry.BoreDiameter), "mm"),
             Row("stack length", a, b, d => Mm(d.Geometry.StackLength), "mm"),
             Row("air gap", a, b, d => Mm(d.Geometry.Gap), "mm"),
@@ -38,6 +37,14 @@ internal static class FigureTables
             Row("gap flux density", a, b, d => d.Geometry.GapFluxDensity, "T"),
         ];
     }
+
+    /// <summary>Machine facts that are a choice among words, not a number (which side of the gap the rotor lies on).</summary>
+    public static ImmutableArray<TextRow> MachineChoices(WindingDesign? a, WindingDesign? b) =>
+    [
+        new("rotor", RotorSide(a), RotorSide(b)),
+    ];
+
+    private static string? RotorSide(WindingDesign? d) => d is null ? null : d.Geometry.RotorOutside ? "outside" : "inside";
 
     public static ImmutableArray<FigureRow> SeriesTurns(WindingDesign? a, WindingDesign? b)
     {

@@ -26,6 +26,7 @@ internal static class PhysicalFacts
             yield return $"winding {d.Winding.Name}";
             yield return $"phases {string.Join(" ", d.Phases.Select(p => p.Name))}";
             foreach (var line in Figures(FigureTables.Machine(null, d))) yield return line;
+            foreach (var choice in FigureTables.MachineChoices(null, d)) yield return $"{choice.Name} {choice.New}";
             var layout = SlotLayout.From(d);
             for (int slot = 1; slot <= d.Slots; slot++)
                 for (int layer = 0; layer < layout.Layers; layer++)

@@ -24,6 +24,7 @@ public static class WindingComparison
             old.Label, @new.Label, old.IsAbsent, @new.IsAbsent,
             Names(old.Design, @new.Design),
             FigureTables.Machine(old.Design, @new.Design),
+            FigureTables.MachineChoices(old.Design, @new.Design),
             slotNote,
             slots,
             slots.IsEmpty ? CoilComparison.Compare(old.Design, @new.Design) : [],

@@ -16,6 +16,7 @@ public sealed record WindingDiff(
     bool NewAbsent,
     ImmutableArray<TextRow> Names,
     ImmutableArray<FigureRow> Machine,
+    ImmutableArray<TextRow> MachineChoices,
     string? SlotNote,
     ImmutableArray<SlotChange> Slots,
     ImmutableArray<CoilChange> Coils,
@@ -34,7 +35,7 @@ public sealed record WindingDiff(
         {
             var changed = ImmutableArray.CreateBuilder<string>();
             if (OldAbsent != NewAbsent) changed.Add("file");
-            if (Machine.Any(r => r.Changed)) changed.Add("machine");
+            if (Machine.Any(r => r.Changed) || MachineChoices.Any(r => r.Changed)) changed.Add("machine");
             if (!Slots.IsEmpty) changed.Add("slots");
             if (!Coils.IsEmpty) changed.Add("coils");
             if (SeriesTurns.Any(r => r.Changed)) changed.Add("series turns");

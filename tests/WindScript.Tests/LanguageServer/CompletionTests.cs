@@ -57,6 +57,15 @@ public class CompletionTests
     }
 
     [Fact]
+    public async Task A_property_that_takes_a_word_offers_its_words()
+    {
+        // The words come from the vocabulary table (rotor inside|outside), whatever is half typed.
+        Assert.Equal(["inside", "outside"], await LabelsAt("machine m {\n  slots 12\n  rotor |\n}\n"));
+        Assert.Equal(["inside", "outside"], await LabelsAt("machine m {\n  slots 12\n  rotor out|\n}\n"));
+        Assert.Empty(await LabelsAt("machine m {\n  slots 12\n  rotor outside |\n}\n"));
+    }
+
+    [Fact]
     public async Task A_half_typed_keyword_still_gets_the_block_keywords()
     {
         var labels = await LabelsAt(Machine + "winding w {\n  layers 2\n  co|\n}\n");

@@ -46,6 +46,24 @@ public sealed class DiffTests : IDisposable
     }
 
     [Fact]
+    public void Moving_the_rotor_outside_is_reported_in_words_not_as_a_number()
+    {
+        // The side of the gap the rotor lies on is a choice, not a figure: "inside -> outside", never "0 -> 1".
+        var hub = File.ReadAllText(Path.Combine(Repo.Examples, "scooter_hub_12s10p.wind"));
+        var inner = hub.Replace("rotor outside", "rotor inside");
+        Assert.NotEqual(hub, inner);
+        var r = CliRunner.Run("diff", Write("a.wind", inner), Write("b.wind", hub));
+        Assert.Equal(1, r.Exit);
+        Assert.Matches(@"~ rotor\s+inside\s+outside", r.Out);
+        Assert.DoesNotContain("1 = yes", r.Out);
+        var json = CliRunner.Run("diff", "--format", "json", Write("a.wind", inner), Write("b.wind", hub));
+        using var doc = JsonDocument.Parse(json.Out);
+        var rotor = doc.RootElement.GetProperty("machineChoices").EnumerateArray().Single(x => x.GetProperty("name").GetString() == "rotor");
+        Assert.Equal(("inside", "outside", true), (rotor.GetProperty("old").GetString(), rotor.GetProperty("new").GetString(), rotor.GetProperty("changed").GetBoolean()));
+        Assert.Contains("machine", doc.RootElement.GetProperty("changed").EnumerateArray().Select(x => x.GetString()));
+    }
+
+    [Fact]
     public void One_changed_pattern_entry_reports_exactly_its_slot_and_the_coil_side_it_returns_to()
     {
         // Slot 4's top coil side goes from U to V; with pitch 10 its return side is slot 14, bottom layer.
