@@ -13,19 +13,19 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor ConductorDescription = new(
         "WS2082", Severity.Error, "Conductor description incomplete or contradictory",
-        "A conductor is round enamelled wire, given by its bare diameter and enamel grade (IEC 60317: grade 1, 2 or 3 sets the overall diameter) or by its overall diameter, or rectangular strip, given by width and height (with corner radius and insulation thickness). A block that mixes the two, or lacks what its kind needs, does not say which wire the shop should use. Coil ends have a shape or a stated length, not both.");
+        "A conductor is round enamelled wire, given by its bare diameter and enamel grade (grade 1, 2 or 3 sets the overall diameter) or by its overall diameter, or rectangular strip, given by width and height (with corner radius and insulation thickness). A block that mixes the two, or lacks what its kind needs, does not say which wire the shop should use. Coil ends have a shape or a stated length, not both. Sources: IEC 60317-0-1 (enamel grades).");
 
     public static readonly DiagnosticDescriptor WireOutsideGradeTable = new(
         "WS2083", Severity.Error, "Bare diameter outside the enamelled-wire table",
-        "The overall diameter of round enamelled wire by grade comes from a table of nominal sizes (after IEC 60317-0-1, from memory) covering bare diameters from 0.1 mm to 2.5 mm. Outside it, give the wire's 'overall_diameter' from the supplier's data sheet instead of a grade.");
+        "The overall diameter of round enamelled wire by grade comes from a table of nominal sizes covering bare diameters from 0.1 mm to 2.5 mm. Outside it, give the wire's 'overall_diameter' from the supplier's data sheet instead of a grade. Sources: IEC 60317-0-1 (maximum overall diameters by grade, from memory).");
 
     public static readonly DiagnosticDescriptor BeyondPackingLimit = new(
         "WS5030", Severity.Error, "Conductors cannot fit the slot",
-        "The insulated conductors need more area than the slot offers inside liner, separator and wedge, beyond what their shape can pack at best: equal round strands fill at most π/(2√3) ≈ 0.907 of a plane (hexagonal packing; a fact of geometry, Lagrange/Thue), rectangular strip at most all of it. No winding technique fits them: use thinner wire, fewer turns or strands, or a larger slot. Fill here is the net fill: insulated conductor area over the slot area inside liner, separator and wedge.");
+        "The insulated conductors need more area than the slot offers inside liner, separator and wedge, beyond what their shape can pack at best: equal round strands fill at most π/(2√3) ≈ 0.907 of a plane (hexagonal packing, the densest packing of equal circles), rectangular strip at most all of it. No winding technique fits them: use thinner wire, fewer turns or strands, or a larger slot. Fill here is the net fill: insulated conductor area over the slot area inside liner, separator and wedge. Sources: common practice (plane geometry: Thue's theorem on circle packing).");
 
     public static readonly DiagnosticDescriptor FillAboveLimit = new(
         "WS5031", Severity.Warning, "Slot fill above the limit",
-        "The net fill (insulated conductor area over the slot area inside liner, separator and wedge) is above the limit the conductor block sets with 'fill_limit', or the default of common practice: 0.75 for random-wound round wire (hand or needle insertion gets hard beyond it) and 0.9 for formed strip. The winding may still fit, but ask the winding shop.");
+        "The net fill (insulated conductor area over the slot area inside liner, separator and wedge) is above the limit the conductor block sets with 'fill_limit', or the default of common practice: 0.75 for random-wound round wire (hand or needle insertion gets hard beyond it) and 0.9 for formed strip. The winding may still fit, but ask the winding shop. Sources: common practice.");
 
     public static readonly DiagnosticDescriptor StrandWiderThanOpening = new(
         "WS5032", Severity.Error, "Strand wider than the slot opening",
@@ -33,7 +33,7 @@ internal static partial class DiagnosticCatalog
 
     public static readonly DiagnosticDescriptor CurrentDensityAboveLimit = new(
         "WS5033", Severity.Warning, "Current density above the limit",
-        "The rms current density of a drive (phase rms current over the copper area of a path: parallel paths times strands in hand times the strand's area) is above the conductor block's 'density_limit', or 6 A/mm² by default: a common-practice figure for totally enclosed fan-cooled machines (about 3-8 A/mm² with air cooling, Pyrhonen et al., Design of Rotating Electrical Machines, ch. 6/7 give ranges). The thermal design decides; check it with a thermal model and test.");
+        "The rms current density of a drive (phase rms current over the copper area of a path: parallel paths times strands in hand times the strand's area) is above the conductor block's 'density_limit', or 6 A/mm² by default, a figure for totally enclosed fan-cooled machines (air-cooled stator windings run at about 3-8 A/mm²). The thermal design decides; check it with a thermal model and test. Sources: common practice.");
 
     public static readonly DiagnosticDescriptor ToothWidthNotPositive = new(
         "WS5034", Severity.Error, "No tooth between the slots",
