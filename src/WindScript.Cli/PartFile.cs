@@ -1,44 +1,29 @@
+using WindScript.Cli.Files;
+
 namespace WindScript.Cli;
 
 /// <summary>
-/// A file written as a stream and published only when complete: the bytes go to a hidden
-/// temporary file beside the target, which is flushed to disk and renamed over the target on
-/// <see cref="Commit"/>. A task killed before that leaves no half-written part under the target's
-/// name (at most a <c>.NAME.PID.tmp</c> file, which the next run of the same part does not read).
+/// One sweep part (<c>-o part-{K}.jsonl</c>), written as a stream under the output rules of
+/// <see cref="OutputFile"/>: a temporary file beside the target, renamed over it on <see cref="Commit"/>
+/// (a task killed before that leaves the earlier part, and the next run removes the stale temporary);
+/// never over an input; through symbolic links; the target's mode and owner kept; directories and
+/// special files refused, devices and pipes (<c>-o /dev/stdout</c>) written as a stream.
 /// </summary>
 public sealed class PartFile : IDisposable
 {
-    private readonly string _target, _temp;
-    private FileStream? _stream;
+    private readonly PendingOutput _output;
 
-    public PartFile(string path)
-    {
-        _target = Path.GetFullPath(path);
-        var dir = Path.GetDirectoryName(_target)!;
-        _temp = Path.Combine(dir, $".{Path.GetFileName(_target)}.{System.Environment.ProcessId}.tmp");
-        _stream = new FileStream(_temp, FileMode.Create, FileAccess.ReadWrite, FileShare.None, 1 << 16);
-    }
+    /// <exception cref="OutputRefusedException">the rules forbid writing the path (the message says why)</exception>
+    public PartFile(string path, IEnumerable<string>? inputs = null) => _output = OutputFile.Open(path, inputs);
 
-    /// <summary>The stream to write (seekable, so writers that go back to patch a header can use it).</summary>
-    public Stream Stream => _stream ?? throw new ObjectDisposedException(nameof(PartFile));
+    /// <summary>The stream to write: seekable for a file (writers that go back to patch a header can use it), not for a pipe or device.</summary>
+    public Stream Stream => _output.Stream;
 
     /// <summary>Flushes to disk and renames the temporary file to the target, replacing any earlier part.</summary>
-    public void Commit()
-    {
-        var stream = _stream ?? throw new ObjectDisposedException(nameof(PartFile));
-        stream.Flush(flushToDisk: true);
-        stream.Dispose();
-        _stream = null;
-        File.Move(_temp, _target, overwrite: true);
-    }
+    public void Commit() => _output.Commit();
 
-    public void Dispose()
-    {
-        if (_stream is null) return;
-        _stream.Dispose();
-        _stream = null;
-        try { File.Delete(_temp); } catch (IOException) { } catch (UnauthorizedAccessException) { }
-    }
+    /// <summary>Without a commit: removes the temporary file and leaves any earlier part as it was.</summary>
+    public void Dispose() => _output.Dispose();
 
     /// <summary>
     /// The path with <c>{K}</c> replaced by the shard number (zero-padded to the width of N, so

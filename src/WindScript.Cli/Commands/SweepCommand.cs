@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WindScript.Cli.Files;
 using WindScript.Cli.Output;
 using WindScript.Sweep;
 using WindScript.Synthesis;
@@ -104,6 +105,11 @@ public static class SweepCommand
 
         PartFile? part;
         try { part = path is null ? null : new PartFile(path); }
+        catch (OutputRefusedException e)
+        {
+            io.Err.WriteLine($"windscript sweep --output: {e.Message}");
+            return ExitCodes.Usage;
+        }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             io.Err.WriteLine($"windscript sweep: cannot write --output '{path}': {IoFailure.Describe(e)}");
@@ -111,6 +117,11 @@ public static class SweepCommand
         }
         using (part)
         {
+            if (a.Format == OutputFormat.Parquet && !part!.Stream.CanSeek)
+            {
+                io.Err.WriteLine($"windscript sweep --output: '{path}' is a stream, and Parquet needs a file (it writes its footer last)");
+                return ExitCodes.Usage;
+            }
             if (a.Format == OutputFormat.Parquet) WriteParquet(io, spec, shard, a, part!.Stream);
             else WriteRecords(io, spec, shard, a, part?.Stream);
             part?.Commit();

@@ -27,20 +27,26 @@ public static class OutputFile
     /// <exception cref="IOException">the system failed the write (full disk, permissions, ...); the target is unchanged</exception>
     public static void WriteAllBytes(string path, byte[] bytes, IEnumerable<string>? inputs = null)
     {
+        using var output = Open(path, inputs);
+        output.Stream.Write(bytes);
+        output.Commit();
+    }
+
+    /// <summary>
+    /// Opens an output to be written as a stream (a sweep part of any size) under the same rules:
+    /// the target is checked now, the bytes go to the temporary file, and <see cref="PendingOutput.Commit"/>
+    /// publishes them; disposing without a commit removes the temporary file and leaves the target as it was.
+    /// A stream target (a device, a pipe) is written directly.
+    /// </summary>
+    /// <exception cref="OutputRefusedException">the target may not be written (the message says why)</exception>
+    public static PendingOutput Open(string path, IEnumerable<string>? inputs = null)
+    {
         if (string.IsNullOrWhiteSpace(path)) throw new OutputRefusedException("the output path is empty");
-        if (IsStreamPath(path))
-        {
-            WriteStream(path, bytes);
-            return;
-        }
+        if (IsStreamPath(path)) return PendingOutput.Direct(OpenStream(path));
         string target = ResolveTarget(path);
         var status = FileStatus.Of(target);
         if (Directory.Exists(target)) throw new OutputRefusedException($"'{path}' is a directory");
-        if (status is { IsStream: true })
-        {
-            WriteStream(target, bytes);
-            return;
-        }
+        if (status is { IsStream: true }) return PendingOutput.Direct(OpenStream(target));
         bool exists = File.Exists(target);
         if (exists && status is { IsRegular: false }) throw new OutputRefusedException($"'{path}' is not a regular file");
         foreach (var input in inputs ?? [])
@@ -56,19 +62,33 @@ public static class OutputFile
         LiveTemporaries[temporary] = 0;
         try
         {
-            using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
-            {
-                stream.Write(bytes);
-                stream.Flush(flushToDisk: true);
-            }
-            if (exists) CopyModeAndOwner(path, target, temporary, status);
-            File.Move(temporary, target, overwrite: true);
+            var stream = new FileStream(temporary, FileMode.Create, FileAccess.ReadWrite, FileShare.None, 1 << 16);
+            return new PendingOutput(stream, () => Publish(path, target, temporary), () => Abandon(temporary));
         }
-        finally
+        catch
         {
-            TryDelete(temporary);
-            LiveTemporaries.TryRemove(temporary, out _);
+            Abandon(temporary);
+            throw;
         }
+    }
+
+    // The target is looked at again when the result is complete: a part may take minutes to write.
+    private static void Publish(string path, string target, string temporary)
+    {
+        var status = FileStatus.Of(target);
+        if (Directory.Exists(target)) throw new OutputRefusedException($"'{path}' is a directory");
+        if (File.Exists(target))
+        {
+            CheckReplaceable(path, target, status);
+            CopyModeAndOwner(path, target, temporary, status);
+        }
+        File.Move(temporary, target, overwrite: true);
+    }
+
+    private static void Abandon(string temporary)
+    {
+        TryDelete(temporary);
+        LiveTemporaries.TryRemove(temporary, out _);
     }
 
     /// <summary>Device and process paths name a stream (the user asked for -o /dev/stdout): never replace them.</summary>
@@ -78,12 +98,8 @@ public static class OutputFile
         return full.StartsWith("/dev/", StringComparison.Ordinal) || full.StartsWith("/proc/", StringComparison.Ordinal);
     }
 
-    private static void WriteStream(string path, byte[] bytes)
-    {
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Write, FileShare.ReadWrite, 1, FileOptions.None);
-        stream.Write(bytes);
-        stream.Flush();
-    }
+    private static FileStream OpenStream(string path) =>
+        new(path, FileMode.Open, FileAccess.Write, FileShare.ReadWrite, 1, FileOptions.None);
 
     /// <summary>The file a path finally names, following symbolic links (a dangling link names the file it would create).</summary>
     private static string ResolveTarget(string path)
@@ -185,6 +201,57 @@ public static class OutputFile
         {
             // Nothing more can be done; the next write removes it as stale.
         }
+    }
+}
+
+/// <summary>
+/// An output being written (<see cref="OutputFile.Open"/>): write <see cref="Stream"/>, then <see cref="Commit"/>
+/// to publish it; <see cref="Dispose"/> without a commit abandons it (the target is left as it was).
+/// </summary>
+public sealed class PendingOutput : IDisposable
+{
+    private readonly Action? _publish, _abandon;
+    private FileStream? _stream;
+
+    internal PendingOutput(FileStream stream, Action? publish, Action? abandon) => (_stream, _publish, _abandon) = (stream, publish, abandon);
+
+    internal static PendingOutput Direct(FileStream stream) => new(stream, null, null);
+
+    /// <summary>The stream to write: seekable for a regular file (Parquet goes back to its header); a device or pipe is not.</summary>
+    public Stream Stream => _stream ?? throw new ObjectDisposedException(nameof(PendingOutput));
+
+    /// <summary>True when the output is a regular file written through a temporary one (false for a device or pipe).</summary>
+    public bool IsFile => _publish is not null;
+
+    /// <summary>Flushes to disk and renames the temporary file over the target (or flushes the stream).</summary>
+    public void Commit()
+    {
+        var stream = _stream ?? throw new ObjectDisposedException(nameof(PendingOutput));
+        try
+        {
+            if (_publish is null)
+            {
+                stream.Flush();
+                return;
+            }
+            stream.Flush(flushToDisk: true);
+            stream.Dispose();
+            _publish();
+        }
+        finally
+        {
+            stream.Dispose();
+            _stream = null;
+            _abandon?.Invoke();   // after a rename there is nothing left to remove
+        }
+    }
+
+    public void Dispose()
+    {
+        if (_stream is null) return;
+        _stream.Dispose();
+        _stream = null;
+        _abandon?.Invoke();
     }
 }
 

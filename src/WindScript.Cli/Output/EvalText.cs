@@ -9,6 +9,10 @@ public static class EvalText
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
+    // Four decimals, or three significant digits for a small value (q = 1/25000 is 0.00004, never "0").
+    private static string Decimal(double v) =>
+        Math.Round(v, 4) != 0 || v == 0 ? v.ToString("0.####", Inv) : double.Parse(v.ToString("G3", Inv), Inv).ToString("0.#################", Inv);
+
     public static void WriteSummary(TextWriter o, WindingDesign d)
     {
         o.WriteLine($"machine {d.Name}");
@@ -17,7 +21,7 @@ public static class EvalText
         o.WriteLine($"  phases m           {d.Phases.Length} ({string.Join(" ", d.Phases.Select(p => p.Name))})");
         o.WriteLine($"  phase shift        {d.PhaseShiftDegrees.ToString("0.###", Inv)} deg electrical");
         double q = (double)d.Slots / (d.Poles * d.Phases.Length);
-        o.WriteLine($"  slots/pole/phase q {FractionText.Of(d.Slots, d.Poles * d.Phases.Length)}{(q % 1 == 0 ? "" : $" = {q.ToString("0.####", Inv)}")}");
+        o.WriteLine($"  slots/pole/phase q {FractionText.Of(d.Slots, d.Poles * d.Phases.Length)}{(q % 1 == 0 ? "" : $" = {Decimal(q)}")}");
         WriteGeometry(o, d.Geometry, d.Slots);
         o.WriteLine();
         var w = d.Winding;

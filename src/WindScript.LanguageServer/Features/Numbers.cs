@@ -11,6 +11,8 @@ public static class Numbers
     {
         if (double.IsNaN(value) || double.IsInfinity(value)) return value.ToString(Inv);
         double rounded = Math.Round(value, decimals);
+        // A small value that is not zero keeps its significant digits (q = 1/25000 is 0.00004, not 0).
+        if (rounded == 0 && value != 0) return double.Parse(value.ToString("G3", Inv), Inv).ToString("0.#################", Inv);
         return (rounded == 0 ? 0 : rounded).ToString("0." + new string('#', decimals), Inv);
     }
 

@@ -344,8 +344,10 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
         }
         if (Math.Abs(q.Value - rounded) > 1e-9 || rounded < min || rounded > max)
         {
-            string range = min == int.MinValue ? "" : max == int.MaxValue ? $" of at least {min}" : $" from {min} to {max}";
-            diagnostics.Add(DiagnosticCatalog.InvalidCount, expression.Span, $"{what} must be a whole number{range}, not {Format(q.Value)}");
+            // The range names the bound that applies: the lower of what the quantity means and what is evaluated.
+            int upper = Math.Min(max, limit);
+            string range = min == int.MinValue ? "" : upper == int.MaxValue ? $" of at least {min}" : $" from {min} to {upper:N0}";
+            diagnostics.Add(DiagnosticCatalog.InvalidCount, expression.Span, $"{what} must be a whole number{range}, not {FormatExact(q.Value)}");
             return null;
         }
         return (int)rounded;
@@ -373,4 +375,10 @@ internal sealed class ExpressionEvaluator(DiagnosticBag diagnostics)
     }
 
     public static string Format(double v) => v.ToString("G10", CultureInfo.InvariantCulture);
+
+    /// <summary>A value as written, to the last digit when it is not whole (2147483648.5 must not read as 2147483648).</summary>
+    public static string FormatExact(double v) =>
+        Math.Abs(v - Math.Round(v)) > 1e-9 && Format(v) is var shown && double.Parse(shown, CultureInfo.InvariantCulture) == Math.Round(v)
+            ? v.ToString("R", CultureInfo.InvariantCulture)
+            : Format(v);
 }

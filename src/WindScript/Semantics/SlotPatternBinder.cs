@@ -85,6 +85,7 @@ internal sealed class SlotPatternBinder(
         if (collector.Broken.Count > 0) return _coils;
         if (settings.Turns is not { } turns)
         {
+            if (settings.TurnsStated) return _coils;   // the refused value was reported where it was written
             var line = collector.LastLine.Values.First();
             diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, line.Layer.Span, "the coils of this pattern have no turns: add a 'turns' statement to the group or winding");
             return _coils;

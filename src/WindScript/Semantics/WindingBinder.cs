@@ -69,7 +69,7 @@ internal sealed class WindingBinder(
         _layers = layers ?? (block.Body.OfType<PatternSyntax>().Any(p => p.Layer.Text == "slots") ? 1 : 2);
 
         // Coils, in source order.
-        var settings = new CoilGroupSettings("", turns, pitch, pitchSpan);
+        var settings = new CoilGroupSettings("", turns, pitch, pitchSpan, TurnsStated: seen.ContainsKey(Vocabulary.Word(PropertyName.Turns)));
         var groupNames = new Dictionary<string, TextSpan>();
         BindCoilStatements(block.Body, scope, settings, allowGroups: true, groupNames, isWinding: true);
 
@@ -95,10 +95,10 @@ internal sealed class WindingBinder(
     private int? BindPitch(PropertySyntax p, Scope scope)
     {
         if (evaluator.EvaluateAs(p.Value, scope, Dimension.SlotDim, "the coil pitch") is not { } y) return null;
-        if (Math.Abs(y - Math.Round(y)) > 1e-9 || y < 1 || (machine.Slots is { } q && y >= q))
+        if (Math.Abs(y - Math.Round(y)) > 1e-9 || y < 1 || y >= (machine.Slots ?? InputLimits.MaxSlots))
         {
             diagnostics.Add(DiagnosticCatalog.InvalidCount, p.Value.Span,
-                $"the coil pitch must be a whole number of slots from 1 to {(machine.Slots is { } q2 ? q2 - 1 : "Q - 1")}, not {ExpressionEvaluator.Format(y)}");
+                $"the coil pitch must be a whole number of slots from 1 to {(machine.Slots is { } q2 ? q2 - 1 : "Q - 1")}, not {ExpressionEvaluator.FormatExact(y)}");
             return null;
         }
         return (int)Math.Round(y);
@@ -168,7 +168,7 @@ internal sealed class WindingBinder(
                 case LetSyntax:
                     break;
                 case PropertySyntax { Property.Name: PropertyName.Turns } p when BlockRules.FirstTime(diagnostics, seen, p):
-                    settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1, limit: InputLimits.MaxTurns) };
+                    settings = settings with { Turns = evaluator.EvaluateInteger(p.Value, scope, "turns per coil", 1, limit: InputLimits.MaxTurns), TurnsStated = true };
                     break;
                 case PropertySyntax { Property.Name: PropertyName.Pitch } p when BlockRules.FirstTime(diagnostics, seen, p):
                     settings = settings with { Pitch = BindPitch(p, scope), PitchSpan = p.Span };
@@ -232,7 +232,7 @@ internal sealed class WindingBinder(
         int? go = BindSlot(coil.Go, scope);
         int? ret = BindSlot(coil.Return, scope);
         int? turns = coil.Turns is { } t ? evaluator.EvaluateInteger(t, scope, "turns per coil", 1, limit: InputLimits.MaxTurns) : settings.Turns;
-        if (coil.Turns is null && settings.Turns is null)
+        if (coil.Turns is null && !settings.TurnsStated)
             diagnostics.Add(DiagnosticCatalog.CoilWithoutTurns, coil.Span,
                 "this coil has no turns: add 'turns N' to it, or a 'turns' statement to its group or winding");
         var (goLayer, returnLayer) = (0, _layers == 2 ? 1 : 0);

@@ -156,6 +156,70 @@ public sealed class OutputSafetyTests : IDisposable
         Assert.Empty(Leftovers());
     }
 
+    // PartFile (sweep parts) follows the same rules as every other output.
+    private static readonly string[] SmallSweep = ["sweep", "--slots", "6..12", "--poles", "2..4", "--orders", "3"];
+
+    [Fact]
+    public void A_sweep_part_refuses_a_directory_with_one_line_naming_it()
+    {
+        var r = CliRunner.Run([.. SmallSweep, "-o", _dir]);
+        Assert.Equal(2, r.Exit);
+        Assert.Contains($"'{_dir}' is a directory", r.Err);
+        Assert.Single(r.Err.TrimEnd().Split('\n'));
+    }
+
+    [Fact]
+    public void A_sweep_part_writes_through_a_symbolic_link_and_keeps_the_mode()
+    {
+        var target = Path.Combine(_dir, "real.jsonl");
+        File.WriteAllText(target, "old\n");
+        File.SetUnixFileMode(target, UnixFileMode.UserRead | UnixFileMode.UserWrite);
+        var link = Path.Combine(_dir, "link.jsonl");
+        File.CreateSymbolicLink(link, "real.jsonl");
+        var stale = Path.Combine(_dir, ".real.jsonl.999999999.tmp");   // left by a killed run
+        File.WriteAllText(stale, "half");
+        Assert.Equal(0, CliRunner.Run([.. SmallSweep, "-o", link]).Exit);
+        Assert.NotNull(new FileInfo(link).LinkTarget);
+        Assert.StartsWith("{", File.ReadAllText(target));
+        Assert.Equal(UnixFileMode.UserRead | UnixFileMode.UserWrite, File.GetUnixFileMode(target));
+        Assert.Empty(Leftovers());
+    }
+
+    [Fact]
+    public void A_sweep_part_on_a_device_is_written_as_a_stream_and_parquet_there_is_refused()
+    {
+        Assert.Equal(0, CliRunner.Run([.. SmallSweep, "-o", "/dev/null"]).Exit);
+        Assert.True(FileStatus.Of("/dev/null") is { IsStream: true });
+        Assert.Empty(Directory.EnumerateFiles("/dev", ".null.*.tmp"));   // before, the part went to /dev/.null.PID.tmp, renamed over the device
+        // A pipe (what -o /dev/stdout is under `| cat`) cannot seek back to a Parquet header.
+        using var pipe = new System.IO.Pipes.AnonymousPipeServerStream(System.IO.Pipes.PipeDirection.In, HandleInheritability.None);
+        var parquet = CliRunner.Run([.. SmallSweep, "--format", "parquet", "-o", $"/proc/self/fd/{pipe.ClientSafePipeHandle.DangerousGetHandle()}"]);
+        Assert.Equal(2, parquet.Exit);
+        Assert.Contains("Parquet needs a file", parquet.Err);
+    }
+
+    [Fact]
+    public void A_sweep_part_refuses_a_file_with_several_hard_links()
+    {
+        var part = Path.Combine(_dir, "part.jsonl");
+        File.WriteAllText(part, "earlier\n");
+        Assert.Equal(0, Native.Link(part, Path.Combine(_dir, "alias.jsonl")));
+        var r = CliRunner.Run([.. SmallSweep, "-o", part]);
+        Assert.Equal(2, r.Exit);
+        Assert.Contains("2 hard links", r.Err);
+        Assert.Equal("earlier\n", File.ReadAllText(part));
+        Assert.Empty(Leftovers());
+    }
+
+    [Fact]
+    public void An_output_opened_as_a_stream_refuses_an_input_of_the_command()
+    {
+        var input = Copy("coil_fixture_ac.wind", "motor.wind");
+        var e = Assert.Throws<OutputRefusedException>(() => new WindScript.Cli.PartFile(input, [input]));
+        Assert.Contains("is an input of this command", e.Message);
+        Assert.Empty(Leftovers());
+    }
+
     private static class Native
     {
         [System.Runtime.InteropServices.DllImport("libc", SetLastError = true)]

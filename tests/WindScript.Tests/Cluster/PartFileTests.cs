@@ -71,7 +71,8 @@ public sealed class PartFileTests : IDisposable
     {
         var task = ClusterSweep.Single([.. Sweep, "-o", Path.Combine(_dir, "no", "such", "part.jsonl")]);
         Assert.Equal(2, task.Exit);
-        Assert.StartsWith("windscript sweep: cannot write", task.Err);
+        Assert.StartsWith("windscript sweep --output: cannot write", task.Err);
+        Assert.Contains("no such directory", task.Err);
     }
 
     [Theory]

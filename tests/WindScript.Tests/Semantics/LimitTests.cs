@@ -145,6 +145,86 @@ public sealed class LimitTests
             using var doc = JsonDocument.Parse(r.Out);
         }
     }
+
+    [Theory]
+    [InlineData("winding w {\n  layers 2\n  turns 2000000000\n  top: A -A\n  pitch 1 slots\n}\n")]
+    [InlineData("winding w {\n  layers 2\n  group g {\n    turns 2000000000\n    top: A -A\n    pitch 1 slots\n  }\n}\n")]
+    [InlineData("winding w {\n  layers 1\n  turns 2000000000\n  coil A: 1 -> 2\n}\n")]
+    public void A_refused_turns_value_is_one_error_without_a_missing_turns_cascade(string winding)
+    {
+        // The limits_beyond case reported WS2013 ("no turns") under the WS2040 of the refused value.
+        var text = "machine m {\n  slots 2\n  poles 2\n  phases A\n  bore 100 mm\n  stack 60 mm\n  gap 1 mm\n}\n" + winding;
+        var errors = Compilation.Compile(text).Diagnostics.Where(d => d.Severity == WindScript.Diagnostics.Severity.Error).ToList();
+        Assert.Equal(["WS2040"], errors.Select(d => d.Code));
+    }
+
+    [Fact]
+    public void A_pattern_without_any_turns_statement_still_reports_WS2013()
+    {
+        var text = "machine m {\n  slots 2\n  poles 2\n  phases A\n  bore 100 mm\n  stack 60 mm\n  gap 1 mm\n}\nwinding w {\n  layers 2\n  top: A -A\n  pitch 1 slots\n}\n";
+        Assert.Contains("WS2013", Codes(text));
+    }
+
+    [Theory]
+    [InlineData("2147483648.5", "from 1 to 10,000, not 2147483648.5")]   // read "not 2147483648", and "at least 1" where 10,000 applies
+    [InlineData("10000.5", "from 1 to 10,000, not 10000.5")]
+    [InlineData("0.5", "from 1 to 10,000, not 0.5")]
+    public void A_turns_value_that_is_not_whole_names_the_limit_and_shows_its_digits(string turns, string expected)
+    {
+        var d = Assert.Single(Compilation.Compile(Winding(turns)).Diagnostics, x => x.Code == "WS2012");
+        Assert.Contains(expected, d.Message);
+    }
+
+    [Fact]
+    public void A_pitch_beyond_the_slot_limit_is_refused_when_the_slot_count_is_not_known()
+    {
+        // With the slot count refused, a pitch of 2^31 slots reached an integer cast.
+        var text = Machine.Replace("slots 24", "slots 1e300") + "winding w {\n  layers 2\n  turns 1\n  pitch 2147483648 slots\n}\n";
+        var d = Assert.Single(Compilation.Compile(text).Diagnostics, x => x.Code == "WS2012");
+        Assert.Contains("not 2147483648", d.Message);
+    }
+
+    [Fact]
+    public void Eval_text_shows_a_small_q_with_its_digits_not_as_zero()
+    {
+        // q = Q/(2p·m) = 1/(1000·25) = 0.00004 (closed form); it printed as "1/25000 = 0".
+        var phases = string.Join(" ", Enumerable.Range(1, 25).Select(k => $"P{k}"));
+        var text = $"machine m {{\n  slots 1\n  poles 1000\n  phases {phases}\n  bore 100 mm\n  stack 60 mm\n  gap 1 mm\n}}\nwinding w {{\n  layers 1\n  coil P1: 1 -> 1 turns 1\n}}\n";
+        var r = CliRunner.RunWithInput(text, "eval", "-");
+        Assert.Contains("1/25000 = 0.00004", r.Out + r.Err);
+    }
+
+    [Fact]
+    public void Hover_numbers_keep_the_digits_of_a_small_value()
+    {
+        Assert.Equal("0.00004", WindScript.LanguageServer.Features.Numbers.Show(1.0 / 25000));
+        Assert.Equal("0.3333", WindScript.LanguageServer.Features.Numbers.Show(1.0 / 3));
+        Assert.Equal("0", WindScript.LanguageServer.Features.Numbers.Show(0));
+    }
+
+    [Theory]
+    [InlineData("report", "--output", "x.html")]
+    [InlineData("plot", "--kind", "field", "-o", "x.svg")]
+    public void Report_and_plot_of_a_number_beyond_range_write_nothing_instead_of_NaN(params string[] command)
+    {
+        // Finding 6: report exited 3 at 1e308 and plot wrote SVGs full of NaN.
+        var dir = Directory.CreateTempSubdirectory("windscript-limits-").FullName;
+        try
+        {
+            var input = Path.Combine(dir, "big.wind");
+            File.WriteAllText(input, File.ReadAllText(Path.Combine(Repo.Examples, "coil_fixture_ac.wind")).Replace("bore 100 mm", "bore 1e308 m"));
+            Assert.Contains("1e308", File.ReadAllText(input));
+            string[] args = [command[0], input, .. command[1..^1], Path.Combine(dir, command[^1])];
+            var r = CliRunner.Run(args);
+            Assert.Equal(1, r.Exit);
+            Assert.Contains("WS2042", r.Err + r.Out);
+            Assert.False(File.Exists(Path.Combine(dir, command[^1])));
+        }
+        finally
+        {
+            Directory.Delete(dir, true);
+        }
+    }
 }
 
 /// <summary>Issue 13, findings 5 and 9: floods of identical diagnostics, and eval's JSON for a file it cannot evaluate.</summary>
