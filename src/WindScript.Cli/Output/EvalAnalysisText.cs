@@ -15,6 +15,7 @@ public static class EvalAnalysisText
         WritePhases(o, r);
         WriteInductances(o, r);
         WriteBackEmf(o, r);
+        if (r.Conductors is { } conductors) EvalConductorText.Write(o, conductors);
         foreach (var d in r.Drives) WriteDrive(o, r, d);
         o.WriteLine();
         o.WriteLine("assumptions");

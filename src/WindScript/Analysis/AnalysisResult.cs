@@ -29,7 +29,8 @@ public sealed record AnalysisResult(
     ImmutableArray<DriveAnalysis> Drives,
     ImmutableArray<string> Assumptions,
     ImmutableArray<string> Defaults,
-    ImmutableArray<string> Notes);
+    ImmutableArray<string> Notes,
+    Conductors.ConductorFigures? Conductors = null);
 
 /// <summary>Core facts: Q, 2p, p, phases, q = Q/(2pm), periodicities and cogging order lcm(Q, 2p).</summary>
 public sealed record MachineSummary(

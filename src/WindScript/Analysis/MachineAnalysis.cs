@@ -59,8 +59,10 @@ public static class MachineAnalysis
             design.Winding.Coils.Length, design.Geometry.SkewSlots, regular);
         var drives = design.Drives.Select(d => DriveOf(design, winding, d, options.Time, maxOrder, gap, backEmf)).ToImmutableArray();
 
+        // Conductors and slots (#15): only when the file describes them.
+        var conductors = Conductors.ConductorAnalysis.Evaluate(design, gap, inductances, double.IsFinite(leakage) ? leakage : null);
         return new AnalysisResult(machine, summary, phases, double.IsFinite(leakage) ? leakage : null,
-            BalancedWaves(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable());
+            BalancedWaves(design, winding, maxOrder), gap, inductances, backEmf, drives, Assumptions, design.Defaults, notes.ToImmutable(), conductors);
     }
 
     private static ImmutableArray<PhaseAnalysis> Phases(WindingDesign design, WindingSpectrum winding, RegularWinding? regular, int maxOrder)

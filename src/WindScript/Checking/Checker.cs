@@ -18,6 +18,8 @@ internal static class Checker
     {
         var c = new CheckContext(design, syntax);
         GeometryChecks.Run(c);
+        // Conductors and slots (#15): local to the slot and wire; they gate no other stage.
+        ConductorChecks.Run(c);
         TurnCountChecks.Run(c);
         DeclaredPitchCheck.Run(c);
         bool admitted = Clean(c, FeasibilityCheck.Run);

@@ -17,6 +17,7 @@ internal static class References
         ["Pyrhonen et al. 2014"] = "J. Pyrhonen, T. Jokinen, V. Hrabovcova, Design of Rotating Electrical Machines, 2nd ed., Wiley, 2014.",
         ["Fitzgerald et al. 2003"] = "A. E. Fitzgerald, C. Kingsley Jr., S. D. Umans, Electric Machinery, 6th ed., McGraw-Hill, 2003.",
         ["Bianchi and Dai Pre 2006"] = "N. Bianchi, M. Dai Pre, \"Use of the star of slots in designing fractional-slot single-layer synchronous motors\", IEE Proc. Electric Power Applications 153(3), 2006.",
+        ["IEC 60317-0-1"] = "IEC 60317-0-1, Specifications for particular types of winding wires, Part 0-1: General requirements, Enamelled round copper wire (the overall diameters used here are from memory).",
         ["Carter 1901"] = "F. W. Carter, \"Air-gap induction\", Electrical World and Engineer 38, 1901 (from memory).",
     };
 

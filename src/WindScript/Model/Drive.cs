@@ -24,6 +24,9 @@ public sealed record Drive
     /// <summary>One entry per phase, in phase order.</summary>
     public required ImmutableArray<PhaseCurrent> Currents { get; init; }
 
+    /// <summary>Electrical angle (rad) of the current ahead of the back-EMF, for the torque, if stated.</summary>
+    public double? CurrentAngle { get; init; }
+
     /// <summary>True when the star point is connected, so zero-sequence current may flow.</summary>
     public bool Neutral { get; init; }
 

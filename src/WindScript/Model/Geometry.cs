@@ -33,6 +33,9 @@ public sealed record Geometry
     /// <summary>Peak of the fundamental air-gap flux density (tesla), for back-EMF.</summary>
     public double? GapFluxDensity { get; init; }
 
+    /// <summary>Diameter of the core's back surface: the stator's outer diameter (its inner diameter when the rotor is outside).</summary>
+    public double? BackDiameter { get; init; }
+
     /// <summary>Bore radius (m), half the bore diameter; null without a bore.</summary>
     public double? BoreRadius => BoreDiameter / 2;
 

@@ -34,6 +34,12 @@ public sealed record WindingDesign
     /// <summary>The winding: layers, paths and coils.</summary>
     public required Winding Winding { get; init; }
 
+    /// <summary>The slot's cross-section, if the file has a slot block.</summary>
+    public SlotGeometry? Slot { get; init; }
+
+    /// <summary>The conductor, end windings and temperature, if the file has a conductor block.</summary>
+    public ConductorSpec? Conductor { get; init; }
+
     /// <summary>The operating points (drives), in source order.</summary>
     public ImmutableArray<Drive> Drives { get; init; } = [];
 

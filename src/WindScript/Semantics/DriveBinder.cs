@@ -28,6 +28,8 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
         for (int k = 0; k < m; k++) components[k] = [];
         bool neutral = false, incomplete = false;
         ImmutableArray<int> sequence = [];
+        double? currentAngle = null;
+        var seen = new Dictionary<string, PropertySyntax>();
 
         // Values first (statement order never changes meaning), then the currents.
         foreach (var let in block.Body.OfType<LetSyntax>())
@@ -40,6 +42,10 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
                     break;
                 case FlagSyntax { Keyword.Text: Vocabulary.Neutral }:
                     neutral = true;
+                    break;
+                case PropertySyntax { Property.Name: PropertyName.CurrentAngle } angle:
+                    if (BlockRules.FirstTime(diagnostics, seen, angle))
+                        currentAngle = evaluator.EvaluateAngle(angle.Value, scope, AngleKind.Electrical, "the current angle");
                     break;
                 case PhaseCurrentSyntax current:
                     if (phases.Resolve(current.Phase) is not { } k) break;
@@ -68,6 +74,7 @@ internal sealed class DriveBinder(DiagnosticBag diagnostics, ExpressionEvaluator
             Name = block.Name.Text,
             Currents = [.. Enumerable.Range(0, m).Select(k => new PhaseCurrent(k, [.. components[k]], spans[k]))],
             Neutral = neutral,
+            CurrentAngle = currentAngle,
             Sequence = sequence,
             Incomplete = incomplete,
             Span = block.Span,

@@ -127,6 +127,7 @@ internal sealed class MachineBinder(DiagnosticBag diagnostics, ExpressionEvaluat
             case PropertyName.Stack: return (facts, g with { StackLength = Positive(Length("the stack length"), "the stack length") });
             case PropertyName.Gap: return (facts, g with { Gap = Positive(Length("the air gap"), "the air gap") });
             case PropertyName.SlotOpening: return (facts, g with { SlotOpening = Positive(Length("the slot opening"), "the slot opening") });
+            case PropertyName.BackDiameter: return (facts, g with { BackDiameter = Positive(Length("the back diameter"), "the back diameter") });
             case PropertyName.RotorRadius: return (facts, g with { RotorRadius = Positive(Length("the rotor radius"), "the rotor radius") });
             case PropertyName.Rotor:
                 // `rotor outside` (hub and fan motors) or `rotor inside` (the default).

@@ -24,7 +24,7 @@ internal static class SemanticBinder
         var defaults = new List<string>();
         var top = new Scope(null);
 
-        BlockSyntax? machineBlock = null, windingBlock = null;
+        BlockSyntax? machineBlock = null, windingBlock = null, slotBlock = null, conductorBlock = null;
         var driveBlocks = new List<BlockSyntax>();
         foreach (var statement in Flatten(tree.Root.Statements))
         {
@@ -43,6 +43,11 @@ internal static class SemanticBinder
                     break;
                 case BlockSyntax { Kind: BlockKind.Drive } b:
                     driveBlocks.Add(b);
+                    break;
+                case BlockSyntax { Kind: BlockKind.Slot or BlockKind.Conductor } b:
+                    ref var one = ref (b.Kind == BlockKind.Slot ? ref slotBlock : ref conductorBlock);
+                    if (one is null) one = b;
+                    else diagnostics.Add(DiagnosticCatalog.MoreThanOne, b.Keyword.Span, $"a file describes one {b.Keyword.Text}; this is a second {b.Keyword.Text} block");
                     break;
                 default:
                     BlockRules.ReportMisplaced(diagnostics, statement, "the top level of a file (put it in a machine, winding or drive block)");
@@ -85,6 +90,10 @@ internal static class SemanticBinder
             if (!windingBlock.Name.IsMissing) model.Define(windingBlock.Name.Text, SymbolKind.Winding, windingBlock.Name.Span);
         }
 
+        // Conductors and slots (#15): optional blocks; a file without them evaluates as before.
+        var slot = slotBlock is null ? null : new SlotBinder(diagnostics, evaluator, model).Bind(slotBlock, top);
+        var conductor = conductorBlock is null ? null : new ConductorBinder(diagnostics, evaluator, model).Bind(conductorBlock, top);
+
         var drives = ImmutableArray.CreateBuilder<Drive>();
         var driveNames = new Dictionary<string, TextSpan>();
         foreach (var block in driveBlocks)
@@ -118,6 +127,8 @@ internal static class SemanticBinder
                 PhaseShiftDegrees = shift,
                 Geometry = machine.Geometry,
                 Winding = winding,
+                Slot = slot,
+                Conductor = conductor,
                 Drives = drives.ToImmutable(),
                 Defaults = [.. defaults.Distinct()],
                 MachineSpan = machine.Span,

@@ -61,6 +61,9 @@ internal static class Vocabulary
         new(Winding, "winding", true, [Coil, "top:", "bottom:", "slots:", For, "group", Let], "winding NAME { ... } — the stator winding: layers, turns, pitch, paths and its coils"),
         new(Group, "group", false, [Coil, "top:", "bottom:", "slots:", For, Let], "group NAME { ... } — a named coil group inside the winding"),
         new(Drive, "drive", true, [Balanced, Neutral, Let], "drive NAME { ... } — an operating point: a current waveform per phase"),
+        // ---- conductors and slots (#15) ----
+        new(Slot, "slot", true, [Let], "slot NAME { ... } — the stator slot's cross-section: shape, dimensions, liner, separator and wedge"),
+        new(Conductor, "conductor", true, [Let], "conductor NAME { ... } — the wire or strip of the winding, its material and temperature, and the end windings"),
     ];
 
     // ---- properties -------------------------------------------------------------------------------
@@ -84,6 +87,37 @@ internal static class Vocabulary
         new(PropertyName.Paths, "paths", [Winding], ValueKind.WholeNumber, Dimension.None, "paths N — parallel paths per phase"),
         new(PropertyName.SeriesTurns, "series_turns", [Winding], ValueKind.WholeNumber, Dimension.None, "series_turns N — declared series turns per phase (checked against the coils)"),
         new(PropertyName.ConductorsPerSlot, "conductors_per_slot", [Winding], ValueKind.WholeNumber, Dimension.None, "conductors_per_slot N — declared conductors per slot (checked against the coils)"),
+
+        // ---- conductors and slots (#15) ----
+        new(PropertyName.BackDiameter, "back_diameter", [Machine], ValueKind.Quantity, Dimension.LengthDim, "back_diameter LENGTH — diameter of the core's back (yoke) surface: the outer diameter of the stator, or its inner diameter when the rotor is outside"),
+        new(PropertyName.SlotShape, "shape", [Slot], ValueKind.Word, Dimension.None, "shape open|semi_closed|trapezoid|round_bottom — open: parallel sides, open full width; semi_closed: parallel sides under tooth tips; trapezoid: parallel teeth under tooth tips; round_bottom: parallel teeth with a semicircular bottom") { Words = ["open", "semi_closed", "trapezoid", "round_bottom"] },
+        new(PropertyName.SlotWidth, "width", [Slot], ValueKind.Quantity, Dimension.LengthDim, "width LENGTH — slot width at the top of the conductor region (under the wedge)"),
+        new(PropertyName.SlotBottomWidth, "bottom_width", [Slot], ValueKind.Quantity, Dimension.LengthDim, "bottom_width LENGTH — trapezoid: slot width at the slot bottom (default: parallel teeth)"),
+        new(PropertyName.SlotDepth, "depth", [Slot], ValueKind.Quantity, Dimension.LengthDim, "depth LENGTH — slot depth from the gap surface to the slot bottom"),
+        new(PropertyName.TipHeight, "tip_height", [Slot], ValueKind.Quantity, Dimension.LengthDim, "tip_height LENGTH — height of the tooth tips at the slot opening (the opening's own depth)"),
+        new(PropertyName.TipTaper, "tip_taper", [Slot], ValueKind.Quantity, Dimension.LengthDim, "tip_taper LENGTH — height over which the slot widens from the opening to its full width"),
+        new(PropertyName.SlotArea, "area", [Slot], ValueKind.Quantity, Dimension.Area, "area AREA — the slot's cross-section under the wedge, when its shape is not given (liner and separator not deducted)"),
+        new(PropertyName.Liner, "liner", [Slot], ValueKind.Quantity, Dimension.LengthDim, "liner LENGTH — thickness of the slot liner (ground insulation)"),
+        new(PropertyName.Separator, "separator", [Slot], ValueKind.Quantity, Dimension.LengthDim, "separator LENGTH — thickness of the separator between the two layers"),
+        new(PropertyName.Wedge, "wedge", [Slot], ValueKind.Quantity, Dimension.LengthDim, "wedge LENGTH — thickness of the slot wedge (closure) above the conductors"),
+        new(PropertyName.DrawnStrands, "drawn_strands", [Slot], ValueKind.WholeNumber, Dimension.None, "drawn_strands N — strands the slot drawing holds (checked against turns and strands in hand)"),
+        new(PropertyName.BareDiameter, "bare_diameter", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "bare_diameter LENGTH — round enamelled wire: copper diameter (with 'grade' for the enamel)"),
+        new(PropertyName.Grade, "grade", [Conductor], ValueKind.WholeNumber, Dimension.None, "grade 1|2|3 — enamel grade of round wire (IEC 60317): the overall diameter follows from it"),
+        new(PropertyName.OverallDiameter, "overall_diameter", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "overall_diameter LENGTH — round wire: diameter over the enamel (instead of a grade)"),
+        new(PropertyName.StripWidth, "strip_width", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "strip_width LENGTH — rectangular strip: bare width (across the slot)"),
+        new(PropertyName.StripHeight, "strip_height", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "strip_height LENGTH — rectangular strip: bare height (along the slot depth)"),
+        new(PropertyName.CornerRadius, "corner_radius", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "corner_radius LENGTH — rectangular strip: radius of its rounded corners"),
+        new(PropertyName.Insulation, "insulation", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "insulation LENGTH — rectangular strip: insulation thickness on each side"),
+        new(PropertyName.Strands, "strands", [Conductor], ValueKind.WholeNumber, Dimension.None, "strands N — strands in hand: parallel wires wound together as one turn (default 1)"),
+        new(PropertyName.Material, "material", [Conductor], ValueKind.Word, Dimension.None, "material copper|aluminium — annealed copper (IEC 60028) or aluminium (IEC 60121)") { Words = ["copper", "aluminium"] },
+        new(PropertyName.Temperature, "temperature", [Conductor], ValueKind.Quantity, Dimension.TemperatureDim, "temperature degC — operating temperature of the winding (resistance and losses; default 20 degC)"),
+        new(PropertyName.EndExtension, "end_extension", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "end_extension LENGTH — straight axial run of a coil side beyond the core, at each end"),
+        new(PropertyName.EndShape, "end_shape", [Conductor], ValueKind.Word, Dimension.None, "end_shape lap|concentric|tooth_coil — the shape of a coil end, from which its length follows") { Words = ["lap", "concentric", "tooth_coil"] },
+        new(PropertyName.EndOverhang, "end_overhang", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "end_overhang LENGTH — lap ends: axial height of the end's apex beyond the straight run"),
+        new(PropertyName.EndLength, "end_length", [Conductor], ValueKind.Quantity, Dimension.LengthDim, "end_length LENGTH — the conductor length of one coil end, slot to slot (instead of a shape)"),
+        new(PropertyName.FillLimit, "fill_limit", [Conductor], ValueKind.Number, Dimension.None, "fill_limit X — highest net fill factor before a warning (default 0.75 for round wire, 0.9 for strip)"),
+        new(PropertyName.DensityLimit, "density_limit", [Conductor], ValueKind.Quantity, Dimension.CurrentDensity, "density_limit A/mm2 — highest rms current density before a warning (default 6 A/mm2)"),
+        new(PropertyName.CurrentAngle, "current_angle", [Drive], ValueKind.Quantity, Dimension.AngleDim, "current_angle ANGLE — electrical angle of the current ahead of the back-EMF, for the torque (default 0: all current on the torque axis)"),
     ];
 
     // ---- layers, amplitudes, functions ------------------------------------------------------------

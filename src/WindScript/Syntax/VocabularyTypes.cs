@@ -3,13 +3,24 @@ using WindScript.Units;
 namespace WindScript.Syntax;
 
 /// <summary>The kinds of block. The words that introduce them are in <see cref="Vocabulary.Blocks"/>.</summary>
-internal enum BlockKind { Machine, Winding, Group, Drive }
+internal enum BlockKind
+{
+    Machine, Winding, Group, Drive,
+    // ---- conductors and slots (#15) ----
+    Slot, Conductor,
+}
 
 /// <summary>Every <c>keyword value</c> property. The words, owners and meanings are in <see cref="Vocabulary.Properties"/>.</summary>
 internal enum PropertyName
 {
     Slots, Poles, Bore, Stack, Gap, SlotOpening, RotorRadius, Rotor, Skew, PhaseShift, GapFluxDensity,
     Layers, Turns, Pitch, Paths, SeriesTurns, ConductorsPerSlot,
+    // ---- conductors and slots (#15): machine, slot, conductor and drive properties ----
+    BackDiameter,
+    SlotShape, SlotWidth, SlotBottomWidth, SlotDepth, TipHeight, TipTaper, SlotArea, Liner, Separator, Wedge, DrawnStrands,
+    BareDiameter, Grade, OverallDiameter, StripWidth, StripHeight, CornerRadius, Insulation, Strands, Material, Temperature,
+    EndExtension, EndShape, EndOverhang, EndLength, FillLimit, DensityLimit,
+    CurrentAngle,
 }
 
 /// <summary>A layer word: <c>top</c> and <c>bottom</c> of a double-layer winding, <c>slots</c> for the one layer of a single-layer pattern.</summary>
@@ -27,6 +38,8 @@ internal enum ValueKind
     Quantity,
     /// <summary>One of the words in <see cref="PropertyWord.Words"/> (<c>rotor outside</c>).</summary>
     Word,
+    /// <summary>A plain number that need not be whole (a fraction such as a fill-factor limit).</summary>
+    Number,
 }
 
 /// <summary>A block word: its kind, whether it stands at the top of a file, and the other statements it takes besides its properties.</summary>

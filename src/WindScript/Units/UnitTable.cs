@@ -29,6 +29,10 @@ internal static class UnitTable
         new("V", Dimension.Voltage, 1.0),
         new("H", Dimension.Inductance, 1.0),
         new("mH", Dimension.Inductance, 1e-3),
+        // ---- conductors and slots ----
+        new("mm2", Dimension.Area, 1e-6),
+        new("A/mm2", Dimension.CurrentDensity, 1e6),
+        new("degC", Dimension.TemperatureDim, 1.0),
     ];
 
     private static readonly Dictionary<string, Unit> BySymbol = All.ToDictionary(u => u.Symbol, StringComparer.Ordinal);
@@ -48,5 +52,8 @@ internal static class UnitTable
         d == Dimension.AngularFrequency ? "Hz" :
         d == Dimension.TimeDim ? "ms" :
         d == Dimension.FluxDensity ? "T" :
-        d == Dimension.Flux ? "Wb" : "";
+        d == Dimension.Flux ? "Wb" :
+        d == Dimension.Area ? "mm2" :
+        d == Dimension.CurrentDensity ? "A/mm2" :
+        d == Dimension.TemperatureDim ? "degC" : "";
 }

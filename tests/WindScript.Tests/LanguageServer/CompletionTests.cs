@@ -32,7 +32,7 @@ public class CompletionTests
     public async Task Top_level_offers_the_blocks()
     {
         var labels = await LabelsAt("|\n");
-        Assert.Equal(["machine", "winding", "drive", "let"], labels);
+        Assert.Equal(["machine", "winding", "drive", "slot", "conductor", "let"], labels);
     }
 
     [Fact]

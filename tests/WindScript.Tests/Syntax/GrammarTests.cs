@@ -95,7 +95,7 @@ public class GrammarTests
         Walk(doc.RootElement);
         var words = new HashSet<string>(StringComparer.Ordinal);
         foreach (var pattern in patterns)
-            foreach (Match group in Regex.Matches(pattern, @"\((?:\?:)?([A-Za-z_/|]+)\)"))
+            foreach (Match group in Regex.Matches(pattern, @"\((?:\?:)?([A-Za-z0-9_/|]+)\)"))
                 foreach (var w in group.Groups[1].Value.Split('|'))
                     if (w.Length > 0) words.Add(w.Replace(@"\/", "/"));
         return words;

@@ -31,6 +31,7 @@ public class VocabularyTests
         {
             if (p.Value == ValueKind.WholeNumber) Assert.True(p.Dimension.IsNone, p.Word);
             else if (p.Value == ValueKind.Word) Assert.True(p.Dimension.IsNone && p.Words.Count > 0, p.Word);
+            else if (p.Value == ValueKind.Number) Assert.True(p.Dimension.IsNone, p.Word);
             else Assert.NotEmpty(Vocabulary.UnitsFor(p.Dimension));
         }
     }
@@ -54,6 +55,7 @@ public class VocabularyTests
         {
             ValueKind.WholeNumber => "2",
             ValueKind.Word => property.Words[0],
+            ValueKind.Number => "0.5",
             _ => $"1 {Vocabulary.UnitsFor(property.Dimension).First()}",
         };
         string statement = $"{word} {value}";
@@ -62,6 +64,8 @@ public class VocabularyTests
             BlockKind.Machine => $"machine m {{\n  {statement}\n}}\n",
             BlockKind.Winding => $"winding w {{\n  {statement}\n}}\n",
             BlockKind.Group => $"winding w {{\n  layers 2\n  group g {{\n    {statement}\n  }}\n}}\n",
+            BlockKind.Slot => $"slot s {{\n  {statement}\n}}\n",
+            BlockKind.Conductor => $"conductor c {{\n  {statement}\n}}\n",
             _ => $"drive d {{\n  {statement}\n}}\n",
         };
         var c = Wind.Compile(text);
