@@ -47,6 +47,14 @@ public static class Palette
         return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
     }
 
+    /// <summary>A colour mixed towards black by t (0 = unchanged, 1 = black): the shop sheet's even-numbered parallel paths.</summary>
+    public static string Shade(string color, double t)
+    {
+        var (r, g, b) = Rgb(color);
+        int Mix(int c) => (int)Math.Round(c * (1 - t));
+        return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
+    }
+
     /// <summary>The tint of a return (negative) side: the phase colour halfway to white (kept apart from every other phase's go and return colours under colour-vision deficiencies, see PaletteVisionTests).</summary>
     public static string ReturnTint(string color) => Tint(color, 0.5);
 

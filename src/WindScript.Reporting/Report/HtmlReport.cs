@@ -230,7 +230,7 @@ public static class HtmlReport
 
     private static string H(string text) => WebUtility.HtmlEncode(text);
 
-    private static string Resource(string name)
+    internal static string Resource(string name)
     {
         using var stream = typeof(HtmlReport).Assembly.GetManifestResourceStream("WindScript.Reporting." + name)
             ?? throw new InvalidOperationException($"Missing embedded resource {name}.");
