@@ -112,9 +112,10 @@ public static class LayoutPlot
             s.Rect(x, cy, w, part, fill, new Stroke(c.Sign > 0 ? Palette.Paper : color, 1));
             string name = c.Phase < phases.Count ? phases[c.Phase].Name : "?";
             string sign = c.Sign > 0 ? "+" : "−";
-            // The sign and the phase name both, shrunk to fit the cell (bold text runs ~15 % wider).
+            // The sign and the phase name both, shrunk to fit the cell with a clear margin (bold text
+            // in the fonts renderers pick runs up to ~30 % wider than the width estimate).
             string text = sign + name;
-            double size = Math.Min(Math.Min(11, part * 0.6), 11 * (w - 4) / (1.15 * Scene.TextWidth(text, 11)));
+            double size = Math.Min(Math.Min(11, part * 0.6), 11 * (w - 6) / (1.3 * Scene.TextWidth(text, 11)));
             if (size < 6) { text = sign; size = Math.Min(11, part * 0.6); }
             if (w >= 6) s.Label(x + w / 2, cy + part / 2, text, size, Palette.TextOn(fill), Anchor.Middle, bold: c.Sign > 0);
         }
