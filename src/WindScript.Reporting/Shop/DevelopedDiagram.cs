@@ -38,7 +38,8 @@ public static class DevelopedDiagram
         var connectors = Connectors(s, widest, w, left);
         int lanes = Lanes(connectors);
         const double laneStep = 9;
-        double titleY = 22, jointY = 44, terminalTop = 54, terminalHeight = 18;
+        // One row per star point or delta corner above the terminals, so joints that overlap along the board stay apart.
+        double titleY = 22, jointStep = 9, terminalTop = 46 + jointStep * Math.Max(1, s.Joints.Count), terminalHeight = 18;
         double laneTop = terminalTop + terminalHeight + 16;
         double frontTop = laneTop + Math.Max(1, lanes) * laneStep + 14;
         double frontHeight = EndHeight(widest, widest, w);
@@ -101,15 +102,17 @@ public static class DevelopedDiagram
                 new Stroke(color, 1.6), Palette.Paper) { Data = [("terminal", marks[i])] });
             scene.Label(x, terminalTop + terminalHeight / 2, marks[i], 12, Palette.Ink, bold: true);
         }
-        foreach (var joint in s.Joints)
+        for (int row = 0; row < s.Joints.Count; row++)
         {
+            var joint = s.Joints[row];
+            double jointY = terminalTop - 10 - row * jointStep;
             var xs = joint.Marks.Where(terminalX.ContainsKey).Select(m => terminalX[m]).Order().ToList();
             if (xs.Count == 0) continue;
             var bar = new List<Point> { new(xs[0], terminalTop), new(xs[0], jointY) };
             bar.Add(new Point(xs[^1], jointY));
             foreach (double x in xs.Skip(1)) { bar.Add(PathShape.Break); bar.Add(new(x, jointY)); bar.Add(new(x, terminalTop)); }
             scene.Add(new PathShape(bar, false, new Stroke(Palette.Ink, 2)) { Data = [("joint", joint.Name)] });
-            scene.Text(xs[^1] + 26, jointY + 4, joint.Kind == JointKind.Star ? $"star point {joint.Name}" : $"delta corner {joint.Name}", 11);
+            scene.Text(xs[^1] + 26, jointY + 4, joint.Kind == JointKind.Star ? $"star point {joint.Name}" : $"delta corner {joint.Name} ({string.Join("–", joint.Marks)})", 11);
         }
 
         // Jumpers and leads, each in its own lane.
@@ -298,7 +301,8 @@ public static class DevelopedDiagram
             scene.Add(new PathShape([from, to], false, new Stroke(Palette.Ink, 2.4)) { Data = [("rotation", r.SlotDirection > 0 ? "increasing" : "decreasing")] });
             scene.Arrow(from, to, Palette.Ink, 2.4, 11);
             text = $"Field travels towards {(r.SlotDirection > 0 ? "increasing" : "decreasing")} slot numbers for the supply {r.Supply}";
-            detail = r.ShaftDirection ?? "The file does not say from which end the slots are numbered, so the direction at the shaft is not given.";
+            detail = (r.ShaftDirection is { } shaft ? $"At the shaft: {shaft} (IEC 60034-8)." : "The file does not say from which end the slots are numbered, so the direction at the shaft is not given.") +
+                     (r.Declared is { } declared ? $" The file declares {declared}." : "");
         }
         scene.Text(left + 104, y, text, 11.5, Palette.Ink, bold: true);
         scene.Text(left + 104, y + 15, detail, 10.5, Palette.Muted);

@@ -17,6 +17,8 @@ public sealed record ShopSheet
     public required int Slots { get; init; }
     public required int Poles { get; init; }
     public required int Layers { get; init; }
+    /// <summary>How the phases are connected, in words ("star, neutral N"; "two isolated stars n1, n2"; "delta d").</summary>
+    public required string ConnectionSummary { get; init; }
     /// <summary>The conductor in words, when the file states one.</summary>
     public string? Wire { get; init; }
     public required IReadOnlyList<string> Phases { get; init; }
@@ -97,19 +99,21 @@ public sealed record ShopJumper(int Number, int Phase, int Path, int FromGroup, 
 
 /// <summary>
 /// A lead: the wire from a path's first or last group end out to a terminal. Several leads share
-/// a mark where paths join at a terminal.
+/// a mark where paths join at a terminal. <paramref name="ExitDegrees"/> is where the file says the
+/// lead leaves the frame (mechanical degrees from the centre of slot 1), null when it does not say.
 /// </summary>
-public sealed record ShopLead(int Number, string Mark, int Phase, int Path, int Group, GroupEnd End, int Slot);
+public sealed record ShopLead(int Number, string Mark, int Phase, int Path, int Group, GroupEnd End, int Slot, double? ExitDegrees = null);
 
 /// <summary>How terminals are joined inside the machine or on the board: a star (neutral) point or a delta corner.</summary>
 public enum JointKind { Star, Delta }
 
 /// <summary>A point where terminal marks are joined (a star point, or one corner of a delta).</summary>
-public sealed record ShopJoint(string Name, JointKind Kind, IReadOnlyList<string> Marks, bool BroughtOut);
+public sealed record ShopJoint(string Name, JointKind Kind, IReadOnlyList<string> Marks);
 
 /// <summary>
-/// The direction the field travels for the supply sequence L1 L2 L3 on U1 V1 W1: +1 towards
-/// increasing slot numbers, -1 towards decreasing; the shaft direction when the file says from
-/// which end the slots are numbered (null otherwise).
+/// The direction the field travels for the supply (L1 L2 L3 on U1 V1 W1): +1 towards increasing
+/// slot numbers, -1 towards decreasing, 0 for none (one phase); at the shaft, seen from the drive
+/// end, when the file says from which end the slots are numbered (null otherwise); and the
+/// direction the file declares (null if none).
 /// </summary>
-public sealed record ShopRotation(int SlotDirection, string? ShaftDirection, string Supply);
+public sealed record ShopRotation(int SlotDirection, string? ShaftDirection, string? Declared, string Supply);

@@ -90,7 +90,7 @@ public static class ShopSheetBuilder
 
         var joints = new List<ShopJoint>();
         if (connection.Star)
-            joints.Add(new ShopJoint("N", JointKind.Star, [.. d.Phases.Select(p => p.Name + "2")], BroughtOut: false));
+            joints.Add(new ShopJoint("N", JointKind.Star, [.. d.Phases.Select(p => p.Name + "2")]));
 
         var notes = new List<string>
         {
@@ -109,6 +109,7 @@ public static class ShopSheetBuilder
             Poles = d.Poles,
             Layers = d.Winding.Layers,
             Wire = Wire(d.Conductor),
+            ConnectionSummary = connection.Star ? "star, neutral N" : "phases brought out separately",
             Phases = [.. d.Phases.Select(p => p.Name)],
             Coils = shopCoils,
             Groups = groups,
@@ -116,7 +117,7 @@ public static class ShopSheetBuilder
             Jumpers = jumpers,
             Leads = leads,
             Joints = joints,
-            Rotation = new ShopRotation(connection.SlotDirection, null, d.Phases.Length >= 3 ? "L1 L2 L3 on " + string.Join(" ", d.Phases.Take(3).Select(p => p.Name + "1")) : "balanced supply in phase order"),
+            Rotation = new ShopRotation(connection.SlotDirection, null, null, d.Phases.Length >= 3 ? "L1 L2 L3 on " + string.Join(" ", d.Phases.Take(3).Select(p => p.Name + "1")) : "balanced supply in phase order"),
             Notes = notes,
         };
     }

@@ -48,13 +48,13 @@ public static class ShopTables
             I(j.ToGroup), End(j.ToEnd), I(j.ToSlot)])]);
 
     public static ShopTable Leads(ShopSheet s) => new("leads", "Leads and terminal marks",
-        ["lead", "terminal mark", "phase", "path", "group", "group end", "exit slot", "exit angle (° mech. from slot 1)", "joined at"],
+        ["lead", "terminal mark", "phase", "path", "group", "group end", "leaves the winding at slot", "exit angle (° mech. from slot 1)", "exit angle from", "joined at"],
         [.. s.Leads.Select(l => (IReadOnlyList<string>)[I(l.Number), l.Mark, s.Phases[l.Phase], I(l.Path), I(l.Group), End(l.End), I(l.Slot),
-            ((l.Slot - 1) * 360.0 / s.Slots).ToString("0.#", Inv), JoinedAt(s, l.Mark)])]);
+            (l.ExitDegrees ?? (l.Slot - 1) * 360.0 / s.Slots).ToString("0.#", Inv), l.ExitDegrees is null ? "its slot" : "the file", JoinedAt(s, l.Mark)])]);
 
     public static ShopTable Points(ShopSheet s) => new("points", "Star, delta and neutral points",
-        ["point", "kind", "terminal marks joined", "brought out"],
-        [.. s.Joints.Select(j => (IReadOnlyList<string>)[j.Name, j.Kind == JointKind.Star ? "star (neutral)" : "delta corner", string.Join(" ", j.Marks), j.BroughtOut ? "yes" : "no"])]);
+        ["point", "kind", "terminal marks joined"],
+        [.. s.Joints.Select(j => (IReadOnlyList<string>)[j.Name, j.Kind == JointKind.Star ? "star point (neutral)" : "delta corner", string.Join(" ", j.Marks)])]);
 
     public static string End(GroupEnd end) => end == GroupEnd.Start ? "start" : "finish";
 
