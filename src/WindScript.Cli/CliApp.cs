@@ -49,6 +49,7 @@ public static class CliApp
             ShowCommand.Create(io),
             PlotCommand.Create(io),
             ReportCommand.Create(io),
+            ShopCommand.Create(io),
             LspCommand.Create(io),
         };
         var parse = root.Parse(args);

@@ -26,9 +26,13 @@ public static class Palette
 
     /// <summary>The exact 2-D field curve beside the thin-gap staircase.</summary>
     public const string Exact = "#56b4e9";
-    public const string Forward = "#0072b2";
-    public const string Backward = "#e69f00";
-    public const string Factor = "#009e73";
+
+    /// <summary>
+    /// Forward and backward waves belong to no phase, so they are drawn in neutral tones that no
+    /// phase uses (dark and light grey), telling them apart by lightness alone.
+    /// </summary>
+    public const string Forward = "#1b1b1b";
+    public const string Backward = "#9a9a9a";
 
     private static readonly string[] Phases = ["#0072b2", "#d55e00", "#009e73", "#cc79a7", "#e69f00", "#56b4e9", "#7a5c00", "#3d3d3d"];
 
@@ -40,6 +44,14 @@ public static class Palette
     {
         var (r, g, b) = Rgb(color);
         int Mix(int c) => (int)Math.Round(c + (255 - c) * t);
+        return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
+    }
+
+    /// <summary>A colour mixed towards black by t (0 = unchanged, 1 = black): the shop sheet's even-numbered parallel paths.</summary>
+    public static string Shade(string color, double t)
+    {
+        var (r, g, b) = Rgb(color);
+        int Mix(int c) => (int)Math.Round(c * (1 - t));
         return $"#{Mix(r):x2}{Mix(g):x2}{Mix(b):x2}";
     }
 

@@ -13,6 +13,12 @@ public abstract record Shape
 {
     /// <summary>An id for the SVG element (the report's script updates a few paths by id).</summary>
     public string? Id { get; init; }
+
+    /// <summary>
+    /// Data attributes for the SVG element (written as <c>data-NAME="VALUE"</c>), so a test or a
+    /// reader of the page can tell what a shape stands for (the shop sheet marks every coil and jumper).
+    /// </summary>
+    public IReadOnlyList<(string Name, string Value)>? Data { get; init; }
 }
 
 /// <summary>

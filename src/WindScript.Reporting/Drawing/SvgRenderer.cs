@@ -28,7 +28,7 @@ public static class SvgRenderer
 
     private static void Write(StringBuilder o, Shape shape)
     {
-        string id = shape.Id is { } value ? $" id=\"{Escape(value)}\"" : "";
+        string id = (shape.Id is { } value ? $" id=\"{Escape(value)}\"" : "") + DataAttributes(shape);
         switch (shape)
         {
             case PathShape p:
@@ -51,6 +51,14 @@ public static class SvgRenderer
                 o.Append($">{Escape(t.Text)}</text>\n");
                 break;
         }
+    }
+
+    private static string DataAttributes(Shape shape)
+    {
+        if (shape.Data is not { Count: > 0 } data) return "";
+        var o = new StringBuilder();
+        foreach (var (name, value) in data) o.Append($" data-{name}=\"{Escape(value)}\"");
+        return o.ToString();
     }
 
     /// <summary>SVG path data for a polyline or polygon.</summary>

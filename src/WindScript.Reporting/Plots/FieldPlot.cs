@@ -121,11 +121,13 @@ public static class FieldPlot
         s.Text(kx, ky + 24, $"−{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 240, ky + 24, $"+{Ticks.Format(peak)}", 10, Palette.Muted, Anchor.Middle);
         s.Text(kx + 120, ky - 6, effectiveGap is > 0 ? (exact is null ? "gap colour: radial B (T), thin gap" : "gap colour: radial B (T), 2-D at mid-gap") : "gap colour: MMF (A)", 10, Palette.Muted, Anchor.Middle);
-        CurrentSymbol(s, new Point(822, ky + 6), 6, true);
-        s.Text(832, ky + 10, "+", 10, Palette.Muted);
-        CurrentSymbol(s, new Point(856, ky + 6), 6, false);
-        s.Text(866, ky + 10, "−", 10, Palette.Muted);
-        s.Text(846, ky + 24, "slot current", 10, Palette.Muted, Anchor.Middle);
+        // Clear of the scale's end label (centred on kx + 240, up to ~25 px each side).
+        double sx = kx + 300;
+        CurrentSymbol(s, new Point(sx - 24, ky + 6), 6, true);
+        s.Text(sx - 14, ky + 10, "+", 10, Palette.Muted);
+        CurrentSymbol(s, new Point(sx + 10, ky + 6), 6, false);
+        s.Text(sx + 20, ky + 10, "−", 10, Palette.Muted);
+        s.Text(sx, ky + 24, "slot current", 10, Palette.Muted, Anchor.Middle);
         return s;
     }
 

@@ -77,7 +77,7 @@ public static class LayoutPlot
                 return new Point(x, laneTop + height * Math.Sin(Math.PI * t));
             }).ToList();
             // A coil that runs past either end of the strip continues at the other end (the strip is a ring).
-            foreach (var piece in Wrap(points, left, stripRight))
+            foreach (var piece in RingStrip.Wrap(points, left, stripRight))
                 s.Polyline(piece, new Stroke(color, 1.2));
         }
         s.Text(left, arcTop + arcBand + 4, "coils (end connections, go side to return side), one lane per phase", 10, Palette.Muted);
@@ -112,26 +112,12 @@ public static class LayoutPlot
             s.Rect(x, cy, w, part, fill, new Stroke(c.Sign > 0 ? Palette.Paper : color, 1));
             string name = c.Phase < phases.Count ? phases[c.Phase].Name : "?";
             string sign = c.Sign > 0 ? "+" : "−";
-            // The sign and the phase name both, shrunk to fit the cell (bold text runs ~15 % wider).
+            // The sign and the phase name both, shrunk to fit the cell with a clear margin (bold text
+            // in the fonts renderers pick runs up to ~30 % wider than the width estimate).
             string text = sign + name;
-            double size = Math.Min(Math.Min(11, part * 0.6), 11 * (w - 4) / (1.15 * Scene.TextWidth(text, 11)));
+            double size = Math.Min(Math.Min(11, part * 0.6), 11 * (w - 6) / (1.3 * Scene.TextWidth(text, 11)));
             if (size < 6) { text = sign; size = Math.Min(11, part * 0.6); }
             if (w >= 6) s.Label(x + w / 2, cy + part / 2, text, size, Palette.TextOn(fill), Anchor.Middle, bold: c.Sign > 0);
         }
-    }
-
-    private static IEnumerable<List<Point>> Wrap(List<Point> points, double left, double right)
-    {
-        double width = right - left;
-        var pieces = new List<List<Point>>();
-        List<Point>? current = null;
-        int? band = null;
-        foreach (var p in points)
-        {
-            int b = p.X < left ? -1 : p.X > right ? 1 : 0;
-            if (band != b) { current = []; pieces.Add(current); band = b; }
-            current!.Add(new Point(p.X - b * width, p.Y));
-        }
-        return pieces.Where(piece => piece.Count > 1);
     }
 }

@@ -19,7 +19,8 @@ public static class SpectrumPlot
         var s = new Scene(820, 610, $"Harmonic spectrum of {d.Name}");
         s.Text(20, 24, $"Harmonic spectrum: winding factors and MMF waves by order ({x.Name})", 14, bold: true);
 
-        // Winding factors of each phase (bars of one phase; the others as marks where they differ).
+        // Winding factors of each phase (bars of the first phase in its colour; the others as marks
+        // in theirs where they differ): a colour here means the same phase as in the layout.
         var factors = new double[d.Phases.Length, maxOrder];
         for (int k = 0; k < d.Phases.Length; k++)
             for (int order = 1; order <= maxOrder; order++) factors[k, order - 1] = d.WindingFactor(k, order);
@@ -29,7 +30,7 @@ public static class SpectrumPlot
         for (int order = 1; order <= maxOrder; order++)
         {
             double kw = factors[0, order - 1];
-            if (kw > 1e-6) s.Rect(top.X(order) - bar / 2, top.Y(kw), bar, top.Y(0) - top.Y(kw), Palette.Factor);
+            if (kw > 1e-6) s.Rect(top.X(order) - bar / 2, top.Y(kw), bar, top.Y(0) - top.Y(kw), Palette.Phase(0));
             for (int k = 1; k < d.Phases.Length; k++)
                 if (Math.Abs(factors[k, order - 1] - kw) > 1e-6)
                     s.Add(new CircleShape(top.At(order, factors[k, order - 1]), 2.5, new Stroke(Palette.Phase(k), 1.2), Palette.Paper));

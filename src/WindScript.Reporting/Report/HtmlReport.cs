@@ -77,7 +77,7 @@ public static class HtmlReport
         Figure(o, "star", StarPlot.Draw(design), "Slot EMF phasors at their electrical angles (Bianchi and Dai Pre, 2006), coloured by the phase of the top-layer coil side; thick arrows are the phase resultants.");
         Figure(o, "mmf", MmfPlot.Draw(excitation, 0), $"F(θ) at t = 0 for {excitation.Name}: the staircase the slot currents make, and its working wave.");
         Figure(o, "spectrum", SpectrumPlot.Draw(excitation), "Winding factors (numeric, from the coil sides) and the MMF waves of the strongest current frequency; forward waves travel towards increasing slot number.");
-        Figure(o, "field", FieldPlot.Draw(excitation, gap, 0), "Radial flux density: the thin-gap staircase with Carter's coefficient and the exact 2-D field of the smooth gap at the rotor surface (the gap ring shows the 2-D field at mid-gap, on its own purple–green scale); flux lines for iron of uniform high permeability. The ideal model has no saturation and no rotor reaction.");
+        Figure(o, "field", FieldPlot.Draw(excitation, gap, 0), "Radial flux density: the thin-gap staircase with Carter's coefficient and the exact 2-D field of the smooth gap at the rotor surface (the gap ring shows the 2-D field at mid-gap, on its own purple–green scale); flux lines for iron of uniform high permeability. The ideal model has no saturation and no rotor reaction." + FieldFigureCaution(analysis, excitation.Drive.Name));
 
         Section(o, "diagnostics");
         Diagnostics(o, compilation);
@@ -154,7 +154,7 @@ public static class HtmlReport
         }
 
         var field = FigureTables.FieldAndInductance(null, a).Where(r => r.New is not null).ToList();
-        if (field.Count > 0) Table(o, "Air gap, inductances and EMF", [.. field.Select(r => (r.Name, Value(r.New, r.Unit)))]);
+        if (field.Count > 0) Table(o, "Air gap, inductances and EMF", [.. field.SelectMany(r => WithCaution(r, a))]);
 
         if (!d.Drives.IsEmpty)
         {
@@ -195,9 +195,31 @@ public static class HtmlReport
     private static void Table(StringBuilder o, string title, IReadOnlyList<(string Name, string Value)> rows)
     {
         o.Append($"<div><h3>{H(title)}</h3>\n<table>\n");
-        foreach (var (name, value) in rows) o.Append($"<tr><th scope=\"row\">{H(name)}</th><td>{H(value)}</td></tr>\n");
+        foreach (var (name, value) in rows)
+        {
+            // A caution sits in the row right below the figure it qualifies.
+            string cls = name.StartsWith(CautionRow, StringComparison.Ordinal) ? " class=\"figure-caution\"" : "";
+            o.Append($"<tr{cls}><th scope=\"row\">{H(name)}</th><td>{H(value)}</td></tr>\n");
+        }
         o.Append("</table></div>\n");
     }
+
+    private const string CautionRow = "caution: ";
+
+    private static string FieldFigureCaution(AnalysisResult a, string driveName) =>
+        a.Drives.FirstOrDefault(d => d.Name == driveName) is { } drive && DriveCaution(drive) is { } caution ? $" Caution for drive {driveName}: {caution}." : "";
+
+    /// <summary>A field row of a drive, followed by the caution its peak gap field calls for (above what iron carries), if any.</summary>
+    private static IEnumerable<(string Name, string Value)> WithCaution(FigureRow row, AnalysisResult a)
+    {
+        yield return (row.Name, Value(row.New, row.Unit));
+        foreach (var drive in a.Drives)
+            if (row.Name == FigureTables.FundamentalFieldRow(drive.Name) && DriveCaution(drive) is { } caution)
+                yield return (CautionRow + "drive " + drive.Name, caution);
+    }
+
+    private static string? DriveCaution(DriveAnalysis drive) =>
+        drive.PeakField is { } peak ? FieldCaution.For(peak) : drive.FundamentalField is { } b1 ? FieldCaution.For(b1) : null;
 
     private static string Value(double? x, string unit) => FigureFormat.Number(x) + (unit.Length > 0 ? " " + unit : "");
 
@@ -208,7 +230,7 @@ public static class HtmlReport
 
     private static string H(string text) => WebUtility.HtmlEncode(text);
 
-    private static string Resource(string name)
+    internal static string Resource(string name)
     {
         using var stream = typeof(HtmlReport).Assembly.GetManifestResourceStream("WindScript.Reporting." + name)
             ?? throw new InvalidOperationException($"Missing embedded resource {name}.");

@@ -14,7 +14,7 @@ internal static class FieldCaution
     /// <summary>The caution for one flux density (T), or null when it is within what iron carries.</summary>
     public static string? ForFluxDensity(double fluxDensity) =>
         Math.Abs(fluxDensity) > IronLimit
-            ? $"{Math.Abs(fluxDensity).ToString("0.0#", System.Globalization.CultureInfo.InvariantCulture)} T is above what iron carries (about {IronLimit:0} T): the ideal model has no saturation and no rotor reaction, so a loaded drive's real gap field is much lower"
+            ? $"a peak gap field of {Math.Abs(fluxDensity).ToString("0.0#", System.Globalization.CultureInfo.InvariantCulture)} T is above what iron carries (about {IronLimit:0} T): the ideal model has no saturation and no rotor reaction, so a loaded drive's real gap field is much lower"
             : null;
 
     /// <summary>The caution for the largest figure of a field description, or null.</summary>

@@ -120,6 +120,9 @@ internal static class FigureTables
         return Math.Sqrt(Math.Max(0, sum - 1));
     }
 
+    /// <summary>The name of a drive's fundamental-field row.</summary>
+    public static string FundamentalFieldRow(string drive) => $"drive {drive}: fundamental B at t = 0";
+
     public static ImmutableArray<FigureRow> FieldAndInductance(AnalysisResult? a, AnalysisResult? b)
     {
         var rows = ImmutableArray.CreateBuilder<FigureRow>();
@@ -147,7 +150,7 @@ internal static class FigureTables
             DriveAnalysis? x = a?.Drives.FirstOrDefault(d => d.Name == drive), y = b?.Drives.FirstOrDefault(d => d.Name == drive);
             rows.Add(new($"drive {drive}: peak MMF at t = 0", x?.PeakMmf, y?.PeakMmf, "A"));
             if (x?.FundamentalField is not null || y?.FundamentalField is not null)
-                rows.Add(new($"drive {drive}: fundamental B at t = 0", x?.FundamentalField?.FluxDensity, y?.FundamentalField?.FluxDensity, "T"));
+                rows.Add(new(FundamentalFieldRow(drive), x?.FundamentalField?.FluxDensity, y?.FundamentalField?.FluxDensity, "T"));
         }
         return rows.ToImmutable();
     }
