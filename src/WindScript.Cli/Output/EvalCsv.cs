@@ -70,9 +70,9 @@ public static class EvalCsv
             Figure("inductance", "", "toothTipLeakage", l.ToothTipLeakage, "H");
             Figure("inductance", "", "endWindingLeakage", l.EndWindingLeakage, "H");
             Figure("inductance", "", "skewLeakage", l.SkewLeakage, "H");
-            Figure("inductance", "", "differentialLeakage", l.DifferentialLeakage, "H");
+            Figure("inductance", "", "differentialLeakage", l.DifferentialLeakageInductance, "H");
             Figure("inductance", "", "totalLeakage", l.TotalLeakage, "H");
-            Figure("inductance", "", "synchronous", l.Synchronous, "H");
+            Figure("inductance", "", "completeSynchronous", l.CompleteSynchronous, "H");
         }
         Figure("inductance", "", "torqueConstant", c.TorqueConstant, "N m/A");
         foreach (var d in c.Drives)

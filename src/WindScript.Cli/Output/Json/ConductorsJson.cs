@@ -58,14 +58,14 @@ public sealed record PhaseInductancesJson(
     [property: JsonPropertyName("toothTipLeakage")] double? ToothTipLeakage,
     [property: JsonPropertyName("endWindingLeakage")] double? EndWindingLeakage,
     [property: JsonPropertyName("skewLeakage")] double? SkewLeakage,
-    [property: JsonPropertyName("differentialLeakage")] double? DifferentialLeakage,
+    [property: JsonPropertyName("differentialLeakageInductance")] double? DifferentialLeakageInductance,
     [property: JsonPropertyName("totalLeakage")] double? TotalLeakage,
-    [property: JsonPropertyName("synchronous")] double? Synchronous,
+    [property: JsonPropertyName("completeSynchronous")] double? CompleteSynchronous,
     [property: JsonPropertyName("slotPermeance")] double? SlotPermeance,
     [property: JsonPropertyName("toothTipPermeance")] double? ToothTipPermeance)
 {
     public static PhaseInductancesJson? From(PhaseInductanceSet? l) => l is null ? null : new(l.Magnetising, l.SlotLeakage, l.ToothTipLeakage,
-        l.EndWindingLeakage, l.SkewLeakage, l.DifferentialLeakage, l.TotalLeakage, l.Synchronous, l.SlotPermeance, l.ToothTipPermeance);
+        l.EndWindingLeakage, l.SkewLeakage, l.DifferentialLeakageInductance, l.TotalLeakage, l.CompleteSynchronous, l.SlotPermeance, l.ToothTipPermeance);
 }
 
 /// <summary>A drive's current density, copper loss, reactance and torque.</summary>

@@ -149,7 +149,7 @@ public class ConductorPhysicsTests
     {
         var (d, f) = Evaluate(Blower);
         var gap = MachineAnalysis.Evaluate(d).Inductances!;
-        Assert.Equal(gap.Synchronous, f.Inductances!.Magnetising!.Value + f.Inductances.DifferentialLeakage!.Value, 9);
+        Assert.Equal(gap.Synchronous, f.Inductances!.Magnetising!.Value + f.Inductances.DifferentialLeakageInductance!.Value, 9);
     }
 
     // Torque constant of a non-salient machine: k_T = m p k_w1 N Phi / sqrt 2 (E = sqrt2 pi f k_w N Phi,
@@ -172,10 +172,10 @@ public class ConductorPhysicsTests
     {
         var (_, f) = Evaluate(Blower);
         var l = f.Inductances!;
-        double total = l.SlotLeakage!.Value + l.ToothTipLeakage!.Value + l.EndWindingLeakage!.Value + l.SkewLeakage!.Value + l.DifferentialLeakage!.Value;
+        double total = l.SlotLeakage!.Value + l.ToothTipLeakage!.Value + l.EndWindingLeakage!.Value + l.SkewLeakage!.Value + l.DifferentialLeakageInductance!.Value;
         Assert.Equal(total, l.TotalLeakage!.Value, 12);
-        Assert.Equal(l.Magnetising!.Value + total, l.Synchronous!.Value, 12);
-        Assert.Equal(2 * Math.PI * 50 * l.Synchronous.Value, f.Drives[0].SynchronousReactance!.Value, 9);
+        Assert.Equal(l.Magnetising!.Value + total, l.CompleteSynchronous!.Value, 12);
+        Assert.Equal(2 * Math.PI * 50 * l.CompleteSynchronous.Value, f.Drives[0].SynchronousReactance!.Value, 9);
     }
 
     // Skew leakage sigma_sq = 1/k_sq^2 - 1 (Pyrhonen et al. ch. 4) with k_sq = sin(p s pi/Q... ) of one slot pitch.
