@@ -42,7 +42,7 @@ public static class DevelopedDiagram
         double laneTop = terminalTop + terminalHeight + 16;
         double frontTop = laneTop + Math.Max(1, lanes) * laneStep + 14;
         double frontHeight = EndHeight(widest, widest, w);
-        double sideTop = frontTop + frontHeight, sideBottom = sideTop + 130;
+        double sideTop = frontTop + frontHeight, sideBottom = sideTop + 170;
         double backBottom = sideBottom + EndHeight(widest, widest, w);
         double groupRowY = backBottom + 18, rotationY = groupRowY + 30, legendY = rotationY + 40;
         string title = $"Developed winding diagram: {s.Machine}, winding {s.Winding} ({q} slots, {s.Poles} poles, {s.Layers} layer{(s.Layers == 1 ? "" : "s")}); seen from the bore, connection end at the top";
@@ -155,11 +155,12 @@ public static class DevelopedDiagram
 
     /// <summary>
     /// Height of a coil's end (front or back) for a span of so many slot pitches, in proportion to
-    /// the widest coil's (at most 64 px): wider coils rise higher, so nested (concentric) coils stay apart.
+    /// the widest coil's (at most 130 px): wider coils rise higher, so nested (concentric) coils stay apart.
     /// </summary>
     private static double EndHeight(int span, int widest, double w)
     {
-        double tallest = Math.Clamp(0.21 * (widest + 0.4) * w, 12, 64);
+        // A rise of 0.8 per half span (about 39 degrees) keeps the crossing legs of neighbouring lap coils well apart.
+        double tallest = Math.Clamp(0.4 * (widest + 0.4) * w, 12, 130);
         return Math.Max(10, tallest * (Math.Abs(span) + 0.4) / (Math.Max(1, widest) + 0.4));
     }
 
@@ -315,7 +316,7 @@ public static class DevelopedDiagram
         int paths = s.Paths.Select(p => p.Number).DefaultIfEmpty(1).Max();
         for (int p = 1; p <= paths; p++)
         {
-            scene.Line(x, y, x + 30, y, new Stroke(PathColor(0, p), 2, PathDash(p)));
+            scene.Line(x, y, x + 30, y, new Stroke(p % 2 == 0 ? Palette.Muted : Palette.Ink, 2, PathDash(p)));
             scene.Text(x + 35, y + 4, $"path {p}", 11);
             x += 50 + Scene.TextWidth($"path {p}", 11);
         }

@@ -32,6 +32,7 @@ public static class ShopHtml
         Fact(o, "phases", string.Join(" ", s.Phases));
         Fact(o, "layers", s.Layers.ToString());
         Fact(o, "coils", s.Coils.Count.ToString());
+        Fact(o, "wire", s.Wire ?? "not stated (strands shown as 1)");
         Fact(o, "coil groups", s.Groups.Count.ToString());
         Fact(o, "parallel paths per phase", string.Join(" / ", s.Phases.Select((_, k) => s.PathsOf(k).Count()).Distinct()));
         Fact(o, "connection", s.Joints.Count == 0 ? "phases brought out separately" : string.Join(", ", s.Joints.Select(j => j.Kind == JointKind.Star ? $"star ({j.Name})" : $"delta ({j.Name})")));

@@ -17,6 +17,8 @@ public sealed record ShopSheet
     public required int Slots { get; init; }
     public required int Poles { get; init; }
     public required int Layers { get; init; }
+    /// <summary>The conductor in words, when the file states one.</summary>
+    public string? Wire { get; init; }
     public required IReadOnlyList<string> Phases { get; init; }
     public required IReadOnlyList<ShopCoil> Coils { get; init; }
     public required IReadOnlyList<ShopGroup> Groups { get; init; }

@@ -9,7 +9,7 @@ namespace WindScript.Reporting.Shop;
 /// </summary>
 public static class ShopSheetBuilder
 {
-    /// <summary>Strands in hand when the file states none (conductors are not yet part of the language).</summary>
+    /// <summary>Strands in hand when the file states no conductor.</summary>
     public const int DefaultStrands = 1;
 
     public static ShopSheet Build(WindingDesign d, string source)
@@ -22,6 +22,7 @@ public static class ShopSheetBuilder
         for (int n = 0; n < order.Count; n++) numberOf[order[n]] = n + 1;
 
         var connection = ProvisionalConnection.Derive(d, order);
+        int strands = d.Conductor?.Strands ?? DefaultStrands;
 
         var groupOfCoil = new int[coils.Length];
         var pathOfGroup = new int[connection.Groups.Count];
@@ -59,7 +60,7 @@ public static class ShopSheetBuilder
             FinishSlot = coils[i].ReturnSlot,
             FinishLayer = coils[i].ReturnLayer,
             Turns = coils[i].Turns,
-            Strands = DefaultStrands,
+            Strands = strands,
             Group = groupOfCoil[i],
             Span = ShortSpan(coils[i], q),
         }).ToList();
@@ -93,7 +94,9 @@ public static class ShopSheetBuilder
 
         var notes = new List<string>
         {
-            $"Strands in hand: the file states no conductors, so every coil is shown with {DefaultStrands} strand.",
+            d.Conductor is null
+                ? $"Strands in hand: the file states no conductor, so every coil is shown with {DefaultStrands} strand."
+                : $"Strands in hand and wire from the file's conductor block '{d.Conductor.Name}'.",
             "Connection: the file states none; groups, paths and leads are provisional (consecutive coils of one phase and polarity form a group; paths split the groups in slot order; the phase finishes are starred).",
         };
 
@@ -105,6 +108,7 @@ public static class ShopSheetBuilder
             Slots = q,
             Poles = d.Poles,
             Layers = d.Winding.Layers,
+            Wire = Wire(d.Conductor),
             Phases = [.. d.Phases.Select(p => p.Name)],
             Coils = shopCoils,
             Groups = groups,
@@ -115,6 +119,18 @@ public static class ShopSheetBuilder
             Rotation = new ShopRotation(connection.SlotDirection, null, d.Phases.Length >= 3 ? "L1 L2 L3 on " + string.Join(" ", d.Phases.Take(3).Select(p => p.Name + "1")) : "balanced supply in phase order"),
             Notes = notes,
         };
+    }
+
+    /// <summary>The conductor in the shop's words ("round wire 0.9 mm bare, grade 2, copper, 2 in hand"), or null when the file states none.</summary>
+    private static string? Wire(ConductorSpec? c)
+    {
+        if (c is null) return null;
+        static string Mm(double metres) => (metres * 1000).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " mm";
+        string shape = c.IsStrip
+            ? $"strip {(c.StripWidth is { } w ? Mm(w) : "?")} × {(c.StripHeight is { } h ? Mm(h) : "?")}"
+            : c.BareDiameter is { } bare ? $"round wire {Mm(bare)} bare" + (c.Grade is { } g ? $", grade {g}" : "")
+            : c.OverallDiameter is { } overall ? $"round wire {Mm(overall)} overall" : "wire of unstated size";
+        return $"{shape}, {(c.Material == ConductorMaterial.Copper ? "copper" : "aluminium")}, {c.Strands} in hand";
     }
 
     /// <summary>The span from go to return the short way round: +k towards higher slot numbers, -k towards lower.</summary>

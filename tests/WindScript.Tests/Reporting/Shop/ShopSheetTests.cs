@@ -121,6 +121,16 @@ public class ShopSheetTests
         Assert.Contains(s.Notes, n => n.Contains("strand", StringComparison.Ordinal));
     }
 
+    [Fact]
+    public void Strands_and_wire_come_from_the_conductor_block_when_the_file_states_one()
+    {
+        var path = Path.Combine(Repo.Cases, "conductors_clean_round.wind");
+        var d = Compilation.Compile(File.ReadAllText(path), path).Design!;
+        var s = ShopSheetBuilder.Build(d, path);
+        Assert.All(s.Coils, c => Assert.Equal(2, c.Strands));   // the file says "strands 2"
+        Assert.Equal("round wire 0.9 mm bare, grade 2, copper, 2 in hand", s.Wire);
+    }
+
     [Theory]
     [MemberData(nameof(Examples))]
     public void The_diagram_marks_every_coil_link_jumper_lead_terminal_and_slot(string example)
