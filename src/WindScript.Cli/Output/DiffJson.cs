@@ -104,6 +104,7 @@ public static class DiffJson
         json.WriteEndObject();
 
         Figures(json, "fieldAndInductance", d.FieldAndInductance);
+        Figures(json, "conductors", d.Conductors);
 
         json.WriteStartArray("drives");
         foreach (var drive in d.Drives)

@@ -32,6 +32,7 @@ public static class DiffText
         WriteFactors(o, d);
         WriteMmf(o, d);
         WriteFigures(o, "air-gap field, inductances and EMF", d.FieldAndInductance, all: true);
+        WriteFigures(o, "conductors: fill, resistance, losses and complete inductances", d.Conductors, all: true);
         WriteDrives(o, d);
         WriteDiagnostics(o, d);
     }

@@ -42,9 +42,9 @@ public static class EvalConductorText
             Row(o, "  tooth-tip leakage", Mh(l.ToothTipLeakage) + (l.ToothTipPermeance is { } ld ? $" (permeance factor {F(ld, 4)})" : ""));
             Row(o, "  end-winding leakage", Mh(l.EndWindingLeakage));
             Row(o, "  skew leakage", Mh(l.SkewLeakage));
-            Row(o, "  differential leakage", Mh(l.DifferentialLeakage));
+            Row(o, "  differential leakage", Mh(l.DifferentialLeakageInductance, " (coefficient x magnetising)"));
             Row(o, "  total leakage", Mh(l.TotalLeakage));
-            Row(o, "  synchronous", Mh(l.Synchronous));
+            Row(o, "  complete synchronous", Mh(l.CompleteSynchronous, " (magnetising + total leakage)"));
         }
         if (c.TorqueConstant is { } kt) Row(o, "torque constant", $"{G(kt)} N m/A rms (per phase current)");
         if (c.Drives.Length > 0)
@@ -62,7 +62,7 @@ public static class EvalConductorText
         }
     }
 
-    private static string Mh(double? henry) => henry is { } h ? G(h * 1e3) : "- (inputs missing, see notes)";
+    private static string Mh(double? henry, string note = "") => henry is { } h ? G(h * 1e3) + note : "- (inputs missing, see notes)";
     private static void Row(TextWriter o, string name, string value) => o.WriteLine($"  {name,-24} {value}");
     private static string F(double v, int decimals) => v.ToString("F" + decimals, Inv);
     private static string G(double v) => (Math.Abs(v) < 1e-12 ? 0 : v).ToString("G5", Inv);

@@ -57,6 +57,7 @@ public static class EvalText
         Mm("air gap", g.Gap);
         Mm("slot opening", g.SlotOpening);
         Mm("rotor radius", g.RotorRadius);
+        Mm("back diameter", g.BackDiameter);
         Mm("slot pitch", g.SlotPitch(slots));
         if (g.SkewSlots != 0) o.WriteLine($"  {"skew",-18} {g.SkewSlots.ToString("0.###", Inv)} slot pitches");
         if (g.GapFluxDensity is { } b) o.WriteLine($"  {"gap flux density",-18} {b.ToString("0.###", Inv)} T (peak, fundamental)");

@@ -58,7 +58,8 @@ internal static class ConductorChecks
         if (c.Diagnostics.Items.Count > before) return false;
 
         // Against the core: a tooth between the slots, and a yoke behind them.
-        foreach (double depthAt in new[] { s.ConductorTop, s.ArcStart ?? depth })
+        // An open slot is as wide at the gap as below; under tooth tips the opening is WS5002's.
+        foreach (double depthAt in new[] { s.Shape == SlotShape.Open ? 0 : s.ConductorTop, s.ConductorTop, s.ArcStart ?? depth })
             if (s.ToothWidthAt(depthAt) is { } tooth && tooth <= 0)
             {
                 c.Diagnostics.Add(DiagnosticCatalog.ToothWidthNotPositive, At(c, slot.Span, PropertyName.SlotWidth, slot.KeywordSpan),
@@ -90,6 +91,19 @@ internal static class ConductorChecks
                 strand.IsStrip
                     ? $"the strip's narrow side with insulation is {Mm(strand.NarrowestWidth)}, wider than the slot opening ({Mm(b1)})"
                     : $"the wire's overall diameter ({Mm(strand.NarrowestWidth)}) is wider than the slot opening ({Mm(b1)}{(section.Shape == SlotShape.Open ? ", inside the liner" : "")})");
+        // A strand must lie in the slot: its insulated width within the narrowest width inside the liner.
+        if (section.Drawable)
+        {
+            double narrowest = Math.Min(section.Width(section.ConductorTop), section.BottomWidth ?? section.Width(section.ConductorTop)) - 2 * section.Liner;
+            if (section.Shape == SlotShape.RoundBottom) narrowest = section.Width(section.ConductorTop) - 2 * section.Liner;
+            double across = strand.IsStrip ? strand.OverallWidth : strand.NarrowestWidth;
+            if (across > narrowest)
+            {
+                c.Diagnostics.Add(DiagnosticCatalog.BeyondPackingLimit, wire,
+                    $"the {(strand.IsStrip ? "strip is" : "wire is")} {Mm(across)} wide with insulation, but the slot is {Mm(narrowest)} wide inside the liner");
+                return;
+            }
+        }
         if (ConductorAnalysis.Fill(d, section, strand, conductor) is not { } fill) return;
         string counted = $"{fill.StrandsPerSlot} strands of {Mm2(strand.InsulatedArea)} insulated need {Mm2(fill.InsulatedArea)}";
         if (fill.NetFill > fill.PackingLimit)

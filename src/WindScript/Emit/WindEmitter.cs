@@ -19,7 +19,7 @@ namespace WindScript.Emit;
 /// made valid ("my machine" becomes my_machine). Lengths are written in mm, frequencies in Hz,
 /// angles in degrees; numbers to 12 significant digits.
 /// </remarks>
-public static class WindEmitter
+public static partial class WindEmitter
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
@@ -32,6 +32,7 @@ public static class WindEmitter
         if (options.Header.Length > 0) o.Append('\n');
         var phaseNames = design.Phases.Select(p => SourceNames.Safe(p.Name, $"P{p.Index + 1}")).ToArray();
         WriteMachine(o, design, phaseNames);
+        WriteSlotAndConductor(o, design);
         o.Append('\n');
         WriteWinding(o, design, phaseNames, options);
         foreach (var drive in design.Drives)
@@ -57,6 +58,7 @@ public static class WindEmitter
         Millimetres(PropertyName.Gap, g.Gap);
         Millimetres(PropertyName.SlotOpening, g.SlotOpening);
         Millimetres(PropertyName.RotorRadius, g.RotorRadius);
+        Millimetres(PropertyName.BackDiameter, g.BackDiameter);
         if (g.RotorOutside) Line(o, $"{Vocabulary.Word(PropertyName.Rotor)} outside");
         if (g.SkewSlots != 0) Line(o, $"{W(PropertyName.Skew)} {Number(g.SkewSlots)} slots");
         if (g.GapFluxDensity is { } b) Line(o, $"{W(PropertyName.GapFluxDensity)} {Number(b)} T");
@@ -157,6 +159,7 @@ public static class WindEmitter
     {
         Open(o, BlockKind.Drive, drive.Name);
         if (drive.Neutral) Line(o, Vocabulary.Neutral);
+        if (drive.CurrentAngle is { } angle) Line(o, $"{W(PropertyName.CurrentAngle)} {Number(angle * 180 / Math.PI)} deg");
         foreach (var current in drive.Currents)
         {
             if (current.Components.IsDefaultOrEmpty || current.Phase < 0 || current.Phase >= phases.Length) continue;

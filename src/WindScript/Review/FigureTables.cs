@@ -155,6 +155,56 @@ internal static class FigureTables
         return rows.ToImmutable();
     }
 
+    /// <summary>
+    /// Conductors and slots (#15): fill, turn length, resistance, mass, the complete per-phase
+    /// inductances and per drive the current density, loss, reactance and torque; a row only where a side has it.
+    /// </summary>
+    public static ImmutableArray<FigureRow> Conductors(AnalysisResult? a, AnalysisResult? b)
+    {
+        var x = a?.Conductors;
+        var y = b?.Conductors;
+        var rows = ImmutableArray.CreateBuilder<FigureRow>();
+        void Add(string name, Func<Analysis.Conductors.ConductorFigures, double?> value, string unit)
+        {
+            double? old = x is null ? null : value(x), @new = y is null ? null : value(y);
+            if (old is not null || @new is not null) rows.Add(new(name, old, @new, unit));
+        }
+        Add("slot area, net", c => c.Fill?.NetArea * 1e6, "mm2");
+        Add("strands per slot", c => c.Fill?.StrandsPerSlot, "");
+        Add("fill factor, gross (copper)", c => c.Fill?.GrossFill, "");
+        Add("fill factor, net (insulated)", c => c.Fill?.NetFill, "");
+        Add("operating temperature", c => c.Resistance?.Temperature, "degC");
+        Add("conductor mass", c => c.Resistance?.Mass, "kg");
+        int phases = Math.Max(x?.Resistance?.Phases.Length ?? 0, y?.Resistance?.Phases.Length ?? 0);
+        for (int k = 0; k < phases; k++)
+        {
+            string phase = (k < (y?.Resistance?.Phases.Length ?? 0) ? y!.Resistance!.Phases[k] : x!.Resistance!.Phases[k]).Name;
+            int i = k;
+            Add($"mean length of turn {phase}", c => c.Resistance is { } r && i < r.Phases.Length ? r.Phases[i].MeanTurnLength * 1000 : null, "mm");
+            Add($"phase resistance at 20 degC {phase}", c => c.Resistance is { } r && i < r.Phases.Length ? r.Phases[i].Resistance20 : null, "ohm");
+            Add($"phase resistance at operating temperature {phase}", c => c.Resistance is { } r && i < r.Phases.Length ? r.Phases[i].ResistanceHot : null, "ohm");
+        }
+        Add("magnetising inductance", c => c.Inductances?.Magnetising * 1000, "mH");
+        Add("slot leakage inductance", c => c.Inductances?.SlotLeakage * 1000, "mH");
+        Add("tooth-tip leakage inductance", c => c.Inductances?.ToothTipLeakage * 1000, "mH");
+        Add("end-winding leakage inductance", c => c.Inductances?.EndWindingLeakage * 1000, "mH");
+        Add("skew leakage inductance", c => c.Inductances?.SkewLeakage * 1000, "mH");
+        Add("differential leakage inductance", c => c.Inductances?.DifferentialLeakageInductance * 1000, "mH");
+        Add("total leakage inductance", c => c.Inductances?.TotalLeakage * 1000, "mH");
+        Add("complete synchronous inductance", c => c.Inductances?.CompleteSynchronous * 1000, "mH");
+        Add("torque constant", c => c.TorqueConstant, "N m/A");
+        var drives = (x?.Drives.Select(d => d.Name) ?? []).Concat(y?.Drives.Select(d => d.Name) ?? []).Distinct();
+        foreach (var drive in drives)
+        {
+            Analysis.Conductors.DriveConductorFigures? D(Analysis.Conductors.ConductorFigures c) => c.Drives.FirstOrDefault(d => d.Name == drive);
+            Add($"drive {drive}: current density", c => D(c)?.CurrentDensity / 1e6, "A/mm2");
+            Add($"drive {drive}: copper loss", c => D(c)?.CopperLoss, "W");
+            Add($"drive {drive}: synchronous reactance", c => D(c)?.SynchronousReactance, "ohm");
+            Add($"drive {drive}: torque", c => D(c)?.Torque, "N m");
+        }
+        return rows.ToImmutable();
+    }
+
     private static double? Emf(AnalysisResult? analysis, int k) =>
         analysis?.BackEmf is { } e && k < e.Phases.Length ? e.Phases[k].VoltsPerHertz : null;
 

@@ -43,6 +43,7 @@ internal static class PhysicalFacts
                 yield return $"winding factor {phase.Phase} order {r.Order} (n = {Number(r.NewElectricalOrder)}): {r.New?.ToString("0.0000", Inv)}";
         foreach (var line in Figures(FigureTables.MmfFigures(null, side.Analysis))) yield return line;
         foreach (var line in Figures(FigureTables.FieldAndInductance(null, side.Analysis))) yield return line;
+        foreach (var line in Figures(FigureTables.Conductors(null, side.Analysis))) yield return line;
         if (side.Compilation is { } compilation)
             foreach (var x in compilation.Diagnostics)
                 yield return $"diagnostic {x.Severity.ToString().ToLowerInvariant()} {x.Code}: {x.Message}";

@@ -33,6 +33,7 @@ public static class WindingComparison
             FigureTables.MmfWaves(old.Analysis, @new.Analysis),
             FigureTables.MmfFigures(old.Analysis, @new.Analysis),
             FigureTables.FieldAndInductance(old.Analysis, @new.Analysis),
+            FigureTables.Conductors(old.Analysis, @new.Analysis),
             DriveComparison.Compare(old.Design, @new.Design),
             DiagnosticComparison.Compare(old.Compilation, @new.Compilation));
     }

@@ -25,6 +25,7 @@ public sealed record WindingDiff(
     ImmutableArray<MmfRow> Mmf,
     ImmutableArray<FigureRow> MmfFigures,
     ImmutableArray<FigureRow> FieldAndInductance,
+    ImmutableArray<FigureRow> Conductors,
     ImmutableArray<DriveChange> Drives,
     ImmutableArray<DiagnosticChange> Diagnostics)
 {
@@ -42,6 +43,7 @@ public sealed record WindingDiff(
             if (WindingFactors.Any(p => p.Rows.Any(r => r.Changed))) changed.Add("winding factors");
             if (Mmf.Any(r => r.Changed) || MmfFigures.Any(r => r.Changed)) changed.Add("MMF harmonics");
             if (FieldAndInductance.Any(r => r.Changed)) changed.Add("field and inductances");
+            if (Conductors.Any(r => r.Changed)) changed.Add("conductors");
             if (!Drives.IsEmpty) changed.Add("drives");
             if (!Diagnostics.IsEmpty) changed.Add("diagnostics");
             return changed.ToImmutable();

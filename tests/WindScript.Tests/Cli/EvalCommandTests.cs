@@ -96,6 +96,20 @@ public class EvalCommandTests
         Assert.Equal(0.9659, double.Parse(fundamental[4], CultureInfo.InvariantCulture), 4);   // q = 2 single layer: k_d1 (Pyrhonen ch. 2)
     }
 
+    // Conductor figures are rows of their own with a figure name, an SI value and its unit, as wide as the header.
+    [Fact]
+    public void Csv_carries_conductor_figures_with_their_units()
+    {
+        var r = CliRunner.Run("eval", Path.Combine(Repo.Cases, "conductors_clean_round.wind"), "--format", "csv");
+        Assert.True(r.Exit == 0, r.Err);
+        var lines = r.Out.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        int columns = lines[0].Split(',').Length;
+        Assert.All(lines, l => Assert.Equal(columns, l.Split(',').Length));
+        var row = lines.Select(l => l.Split(',')).First(c => c[0] == "resistance" && c[1] == "U" && c[^3] == "resistance20");
+        Assert.Equal("ohm", row[^1]);
+        Assert.InRange(double.Parse(row[^2], CultureInfo.InvariantCulture), 0.1, 1);
+    }
+
     [Theory]
     [InlineData("--at", "soon")]
     [InlineData("--orders", "0")]

@@ -19,12 +19,14 @@ public sealed record EvalAnalysisJson(
     [property: JsonPropertyName("drives")] IReadOnlyList<DriveJson> Drives,
     [property: JsonPropertyName("assumptions")] IReadOnlyList<string> Assumptions,
     [property: JsonPropertyName("defaults")] IReadOnlyList<string> Defaults,
-    [property: JsonPropertyName("notes")] IReadOnlyList<string> Notes)
+    [property: JsonPropertyName("notes")] IReadOnlyList<string> Notes,
+    [property: JsonPropertyName("conductors")] ConductorsJson? Conductors)
 {
     public static EvalAnalysisJson From(AnalysisResult r) => new(
         MachineJson.From(r.Machine), WindingJson.From(r.Winding), [.. r.Phases.Select(PhaseJson.From)],
         r.DifferentialLeakage, BalancedJson.From(r.Balanced), GapJson.From(r.Gap), InductancesJson.From(r.Inductances),
-        BackEmfJson.From(r.BackEmf), [.. r.Drives.Select(DriveJson.From)], r.Assumptions, r.Defaults, r.Notes);
+        BackEmfJson.From(r.BackEmf), [.. r.Drives.Select(DriveJson.From)], r.Assumptions, r.Defaults, r.Notes,
+        ConductorsJson.From(r.Conductors));
 }
 
 // Property names come from the attributes above, never from a naming policy: a renamed C#

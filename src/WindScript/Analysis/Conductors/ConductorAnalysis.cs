@@ -174,7 +174,7 @@ internal static class ConductorAnalysis
         double? hz = strongest?.FrequencyHz;
         double? density = strand is not null && design.Conductor is { } c ? largest / (design.Winding.Paths * c.Strands * strand.BareArea) : null;
         double? loss = resistance is { } r ? r.Phases.Select((ph, k) => k < rms.Length ? rms[k] * rms[k] * ph.ResistanceHot : 0).Sum() : null;
-        double? reactance = hz is { } f && inductances?.Synchronous is { } ls ? 2 * Math.PI * f * ls : null;
+        double? reactance = hz is { } f && inductances?.CompleteSynchronous is { } ls ? 2 * Math.PI * f * ls : null;
         double angle = drive.CurrentAngle ?? 0;
         double? torque = null;
         if (torqueConstant is { } kt && strongest is not null && drive.Currents.Length > 0)

@@ -52,7 +52,7 @@ public sealed record PhaseResistanceFigures(string Name, double MeanTurnLength, 
 
 /// <summary>
 /// Per-phase inductances for balanced currents (H): magnetising, slot, tooth-tip, end-winding, skew
-/// and differential leakage, their sum (the total leakage) and the synchronous inductance; null where
+/// and differential leakage, their sum (the total leakage) and the complete synchronous inductance L_m + L_σ (not the air-gap one of <see cref="AnalysisResult.Inductances"/>); null where
 /// an input is missing. Also the slot permeance factors λ (÷ μ0 per unit length) of the slot.
 /// </summary>
 public sealed record PhaseInductanceSet(
@@ -61,9 +61,9 @@ public sealed record PhaseInductanceSet(
     double? ToothTipLeakage,
     double? EndWindingLeakage,
     double? SkewLeakage,
-    double? DifferentialLeakage,
+    double? DifferentialLeakageInductance,
     double? TotalLeakage,
-    double? Synchronous,
+    double? CompleteSynchronous,
     double? SlotPermeance,
     double? ToothTipPermeance);
 
