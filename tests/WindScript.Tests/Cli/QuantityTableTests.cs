@@ -72,8 +72,8 @@ public class QuantityTableTests
             var shown = Regex.Match(outputs["show"], @"differential leakage coefficient: ([0-9.eE+-]+)");
             Assert.True(shown.Success, "show prints no differential leakage coefficient");
             // show writes six significant digits and at most six decimals: within half a unit of the last.
-            double json = sigma.GetDouble(), text = double.Parse(shown.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture);
-            Assert.True(Math.Abs(json - text) <= 5.01e-7 + 5e-6 * Math.Abs(json), $"eval JSON {json}, show {text}");
+            double inJson = sigma.GetDouble(), inShow = double.Parse(shown.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture);
+            Assert.True(Math.Abs(inJson - inShow) <= 5.01e-7 + 5e-6 * Math.Abs(inJson), $"eval JSON {inJson}, show {inShow}");
         }
     }
 }
